@@ -1,0 +1,2 @@
+/** Calibrated amplitude spectra and Welch power spectral densities. */
+package org.foldbook.dsp.spectrum;

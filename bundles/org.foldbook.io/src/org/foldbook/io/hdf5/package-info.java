@@ -1,0 +1,2 @@
+/** HDF5 dataset readers. */
+package org.foldbook.io.hdf5;

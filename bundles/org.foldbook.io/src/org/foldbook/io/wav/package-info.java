@@ -1,0 +1,2 @@
+/** RIFF WAVE and RF64 readers. */
+package org.foldbook.io.wav;
