@@ -1,0 +1,133 @@
+package org.foldbook.dsp.sweep;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.List;
+
+/**
+ * Gives every source peak its verdict at one rate and every peak seen there its source.
+ *
+ * <p>The apparent frequency of a source peak at rate fs is |f − k·fs| with k = round(f/fs) (folding;
+ * Oppenheim &amp; Schafer ch. 4). A peak seen within the match radius of it is that source peak arriving:
+ * SURVIVES when k = 0, FOLDS otherwise. The match radius is half a source bin (the source peak's own
+ * frequency is known only to its bin) plus {@code matchBins} bins at the rate. Source peaks are served
+ * strongest first; one whose only candidate was already taken by a stronger source peak MERGES into it; one
+ * with no candidate is SUPPRESSED. Peaks seen that no source peak claims are UNEXPLAINED.
+ *
+ * <p>Levels are compared as power in one bin (density + 10·log10(bin width)), which for a tone stays put
+ * when the rate, and so the bin width, changes; the gain is then the attenuation the peak got (±1.4 dB of
+ * Hann scalloping, Harris 1978 Table 1, when the tone sits differently on the two bin grids).
+ */
+public final class VerdictClassifier {
+    /** Default match radius in bins at the rate, beyond the source-bin half width: 1.5 (common practice). */
+    public static final double DEFAULT_MATCH_BINS = 1.5;
+
+    private final List<SourcePeak> sources;
+    private final double sourceBinWidth;
+    private final double matchBins;
+
+    public VerdictClassifier(List<SourcePeak> sources, double sourceBinWidth, double matchBins) {
+        this.sources = List.copyOf(sources);
+        for (int i = 0; i < this.sources.size(); i++) {
+            if (this.sources.get(i).id() != i) {
+                throw new IllegalArgumentException("sources[" + i + "] has id " + this.sources.get(i).id()
+                        + ", ids must be 0..n-1 in order");
+            }
+        }
+        if (!(sourceBinWidth > 0) || Double.isInfinite(sourceBinWidth)) {
+            throw new IllegalArgumentException("sourceBinWidth must be a finite number > 0, was " + sourceBinWidth);
+        }
+        if (!(matchBins >= 0) || Double.isInfinite(matchBins)) {
+            throw new IllegalArgumentException("matchBins must be finite and >= 0, was " + matchBins);
+        }
+        this.sourceBinWidth = sourceBinWidth;
+        this.matchBins = matchBins;
+    }
+
+    /** Apparent frequency of {@code f} sampled at {@code fs}: |f − k·fs|, k = round(f/fs). */
+    public static double apparentFrequency(double f, double fs) {
+        return Math.abs(f - fs * Math.rint(f / fs));
+    }
+
+    /** Fold order k = round(f/fs); 0 means the frequency is below fs/2 and is kept as it is. */
+    public static long foldOrder(double f, double fs) {
+        return (long) Math.rint(f / fs);
+    }
+
+    public List<SourcePeak> sources() {
+        return sources;
+    }
+
+    public double sourceBinWidth() {
+        return sourceBinWidth;
+    }
+
+    /**
+     * Classifies the peaks seen at {@code step}, from a spectrum of bin width {@code binWidth} taken over
+     * {@code outputSamples} values.
+     */
+    public RateResult classify(RateStep step, long outputSamples, double binWidth, List<SpectralPeak> seen) {
+        if (!(binWidth > 0) || Double.isInfinite(binWidth)) {
+            throw new IllegalArgumentException("binWidth must be a finite number > 0, was " + binWidth);
+        }
+        double fs = step.effectiveRate();
+        double radius = 0.5 * sourceBinWidth + matchBins * binWidth;
+        double binDb = 10 * Math.log10(binWidth);
+        int n = sources.size();
+        double[] apparent = new double[n];
+        for (int i = 0; i < n; i++) {
+            apparent[i] = apparentFrequency(sources.get(i).frequency(), fs);
+        }
+        Integer[] order = new Integer[n];
+        for (int i = 0; i < n; i++) {
+            order[i] = i;
+        }
+        Arrays.sort(order, Comparator.comparingDouble((Integer i) -> -sources.get(i).powerDb()).thenComparing(i -> i));
+
+        int[] claimedBy = new int[seen.size()];
+        Arrays.fill(claimedBy, -1);
+        SourceFate[] fates = new SourceFate[n];
+        for (int i : order) {
+            SourcePeak src = sources.get(i);
+            int best = -1;
+            int bestTaken = -1;
+            for (int j = 0; j < seen.size(); j++) {
+                double d = Math.abs(seen.get(j).frequency() - apparent[i]);
+                if (d > radius) {
+                    continue;
+                }
+                if (claimedBy[j] < 0) {
+                    if (best < 0 || d < Math.abs(seen.get(best).frequency() - apparent[i])) {
+                        best = j;
+                    }
+                } else if (bestTaken < 0 || d < Math.abs(seen.get(bestTaken).frequency() - apparent[i])) {
+                    bestTaken = j;
+                }
+            }
+            if (best >= 0) {
+                claimedBy[best] = i;
+                SpectralPeak p = seen.get(best);
+                Verdict v = foldOrder(src.frequency(), fs) == 0 ? Verdict.SURVIVES : Verdict.FOLDS;
+                fates[i] = new SourceFate(i, v, apparent[i], p.frequency(), p.levelDb() + binDb - src.powerDb(), -1);
+            } else if (bestTaken >= 0) {
+                SpectralPeak p = seen.get(bestTaken);
+                fates[i] = new SourceFate(i, Verdict.MERGES, apparent[i], p.frequency(),
+                        p.levelDb() + binDb - src.powerDb(), claimedBy[bestTaken]);
+            } else {
+                fates[i] = new SourceFate(i, Verdict.SUPPRESSED, apparent[i], Double.NaN, Double.NaN, -1);
+            }
+        }
+        List<ObservedPeak> observed = new ArrayList<>(seen.size());
+        for (int j = 0; j < seen.size(); j++) {
+            SpectralPeak p = seen.get(j);
+            int s = claimedBy[j];
+            if (s < 0) {
+                observed.add(new ObservedPeak(p.frequency(), p.levelDb(), Verdict.UNEXPLAINED, -1, Double.NaN));
+            } else {
+                observed.add(new ObservedPeak(p.frequency(), p.levelDb(), fates[s].verdict(), s, fates[s].gainDb()));
+            }
+        }
+        return new RateResult(step, outputSamples, binWidth, observed, Arrays.asList(fates));
+    }
+}
