@@ -1,0 +1,178 @@
+package org.foldbook.io.internal;
+
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
+import java.nio.ByteOrder;
+
+import org.foldbook.io.SampleType;
+
+/**
+ * Turns stored samples into doubles: {@code value = stored * scale[c] + offset[c]}, for interleaved
+ * frames of {@code channels} samples. Floating-point samples that are NaN or infinite are reported
+ * (the recording formats read here have no use for them), integer samples never are.
+ */
+public final class SampleCodec {
+    private static final VarHandle S16_LE = view(short[].class, ByteOrder.LITTLE_ENDIAN);
+    private static final VarHandle S16_BE = view(short[].class, ByteOrder.BIG_ENDIAN);
+    private static final VarHandle S32_LE = view(int[].class, ByteOrder.LITTLE_ENDIAN);
+    private static final VarHandle S32_BE = view(int[].class, ByteOrder.BIG_ENDIAN);
+    private static final VarHandle S64_LE = view(long[].class, ByteOrder.LITTLE_ENDIAN);
+    private static final VarHandle S64_BE = view(long[].class, ByteOrder.BIG_ENDIAN);
+    private static final VarHandle F32_LE = view(float[].class, ByteOrder.LITTLE_ENDIAN);
+    private static final VarHandle F32_BE = view(float[].class, ByteOrder.BIG_ENDIAN);
+    private static final VarHandle F64_LE = view(double[].class, ByteOrder.LITTLE_ENDIAN);
+    private static final VarHandle F64_BE = view(double[].class, ByteOrder.BIG_ENDIAN);
+
+    private static VarHandle view(Class<?> arrayType, ByteOrder order) {
+        return MethodHandles.byteArrayViewVarHandle(arrayType, order);
+    }
+
+    private final SampleType type;
+    private final boolean little;
+    private final int channels;
+    private final double[] scale;
+    private final double[] offset;
+
+    public SampleCodec(SampleType type, ByteOrder order, int channels, double[] scale, double[] offset) {
+        if (scale.length != channels || offset.length != channels) {
+            throw new IllegalArgumentException("scale/offset: need one per channel (" + channels + ")");
+        }
+        this.type = type;
+        this.little = order == ByteOrder.LITTLE_ENDIAN;
+        this.channels = channels;
+        this.scale = scale.clone();
+        this.offset = offset.clone();
+    }
+
+    /** Same scale and offset on every channel. */
+    public static SampleCodec uniform(SampleType type, ByteOrder order, int channels, double scale, double offset) {
+        double[] s = new double[channels];
+        double[] o = new double[channels];
+        java.util.Arrays.fill(s, scale);
+        java.util.Arrays.fill(o, offset);
+        return new SampleCodec(type, order, channels, s, o);
+    }
+
+    public SampleType type() {
+        return type;
+    }
+
+    public int frameBytes() {
+        return type.bytes() * channels;
+    }
+
+    /** Stored value of the sample at {@code p}, before scale and offset. */
+    double raw(byte[] src, int p) {
+        switch (type) {
+        case UINT8:
+            return src[p] & 0xFF;
+        case INT8:
+            return src[p];
+        case INT16:
+            return little ? (short) S16_LE.get(src, p) : (short) S16_BE.get(src, p);
+        case UINT16:
+            return (little ? (short) S16_LE.get(src, p) : (short) S16_BE.get(src, p)) & 0xFFFF;
+        case INT24:
+            return little ? ((src[p + 2] << 16) | ((src[p + 1] & 0xFF) << 8) | (src[p] & 0xFF))
+                    : ((src[p] << 16) | ((src[p + 1] & 0xFF) << 8) | (src[p + 2] & 0xFF));
+        case INT32:
+            return little ? (int) S32_LE.get(src, p) : (int) S32_BE.get(src, p);
+        case UINT32:
+            return (little ? (int) S32_LE.get(src, p) : (int) S32_BE.get(src, p)) & 0xFFFFFFFFL;
+        case INT64:
+            return little ? (long) S64_LE.get(src, p) : (long) S64_BE.get(src, p);
+        case FLOAT32:
+            return little ? (float) F32_LE.get(src, p) : (float) F32_BE.get(src, p);
+        case FLOAT64:
+            return little ? (double) F64_LE.get(src, p) : (double) F64_BE.get(src, p);
+        default:
+            throw new IllegalStateException(type.name());
+        }
+    }
+
+    /**
+     * Decodes {@code frames} interleaved frames starting at {@code src[p]} into one array per channel.
+     *
+     * @return -1, or the sample index (frame * channels + channel) of the first NaN/infinite value
+     */
+    public long decode(byte[] src, int p, int frames, double[][] dest, int destOffset) {
+        switch (type) {
+        case INT16:
+            return little ? decode16le(src, p, frames, dest, destOffset) : generic(src, p, frames, dest, destOffset);
+        case INT24:
+            return little ? decode24le(src, p, frames, dest, destOffset) : generic(src, p, frames, dest, destOffset);
+        default:
+            return generic(src, p, frames, dest, destOffset);
+        }
+    }
+
+    // The two layouts that dominate lab WAV files get their own tight loops.
+    private long decode16le(byte[] src, int p, int frames, double[][] dest, int off) {
+        int ch = channels;
+        for (int c = 0; c < ch; c++) {
+            double[] d = dest[c];
+            double s = scale[c];
+            double o = offset[c];
+            int q = p + 2 * c;
+            int step = 2 * ch;
+            for (int f = 0; f < frames; f++, q += step) {
+                d[off + f] = (short) S16_LE.get(src, q) * s + o;
+            }
+        }
+        return -1;
+    }
+
+    private long decode24le(byte[] src, int p, int frames, double[][] dest, int off) {
+        int ch = channels;
+        for (int c = 0; c < ch; c++) {
+            double[] d = dest[c];
+            double s = scale[c];
+            double o = offset[c];
+            int q = p + 3 * c;
+            int step = 3 * ch;
+            for (int f = 0; f < frames; f++, q += step) {
+                int v = (src[q + 2] << 16) | ((src[q + 1] & 0xFF) << 8) | (src[q] & 0xFF);
+                d[off + f] = v * s + o;
+            }
+        }
+        return -1;
+    }
+
+    private long generic(byte[] src, int p, int frames, double[][] dest, int off) {
+        int bytes = type.bytes();
+        boolean checkFinite = type.isFloatingPoint();
+        for (int f = 0; f < frames; f++) {
+            for (int c = 0; c < channels; c++, p += bytes) {
+                double v = raw(src, p);
+                if (checkFinite && !Double.isFinite(v)) {
+                    return (long) f * channels + c;
+                }
+                dest[c][off + f] = v * scale[c] + offset[c];
+            }
+        }
+        return -1;
+    }
+
+    /** As {@link #decode} but into one interleaved array. */
+    public long decodeInterleaved(byte[] src, int p, int frames, double[] dest, int off) {
+        int bytes = type.bytes();
+        boolean checkFinite = type.isFloatingPoint();
+        int n = frames * channels;
+        if (type == SampleType.INT16 && little) {
+            for (int i = 0; i < n; i++, p += 2) {
+                int c = i % channels;
+                dest[off + i] = (short) S16_LE.get(src, p) * scale[c] + offset[c];
+            }
+            return -1;
+        }
+        for (int i = 0; i < n; i++, p += bytes) {
+            int c = i % channels;
+            double v = raw(src, p);
+            if (checkFinite && !Double.isFinite(v)) {
+                return i;
+            }
+            dest[off + i] = v * scale[c] + offset[c];
+        }
+        return -1;
+    }
+}
