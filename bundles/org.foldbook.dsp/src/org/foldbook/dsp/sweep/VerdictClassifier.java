@@ -5,6 +5,8 @@ import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 
+import org.foldbook.dsp.peaks.SpectralPeak;
+
 /**
  * Gives every source peak its verdict at one rate and every peak seen there its source.
  *
@@ -93,15 +95,15 @@ public final class VerdictClassifier {
             int best = -1;
             int bestTaken = -1;
             for (int j = 0; j < seen.size(); j++) {
-                double d = Math.abs(seen.get(j).frequency() - apparent[i]);
+                double d = Math.abs(seen.get(j).frequencyHz() - apparent[i]);
                 if (d > radius) {
                     continue;
                 }
                 if (claimedBy[j] < 0) {
-                    if (best < 0 || d < Math.abs(seen.get(best).frequency() - apparent[i])) {
+                    if (best < 0 || d < Math.abs(seen.get(best).frequencyHz() - apparent[i])) {
                         best = j;
                     }
-                } else if (bestTaken < 0 || d < Math.abs(seen.get(bestTaken).frequency() - apparent[i])) {
+                } else if (bestTaken < 0 || d < Math.abs(seen.get(bestTaken).frequencyHz() - apparent[i])) {
                     bestTaken = j;
                 }
             }
@@ -109,10 +111,10 @@ public final class VerdictClassifier {
                 claimedBy[best] = i;
                 SpectralPeak p = seen.get(best);
                 Verdict v = foldOrder(src.frequency(), fs) == 0 ? Verdict.SURVIVES : Verdict.FOLDS;
-                fates[i] = new SourceFate(i, v, apparent[i], p.frequency(), p.levelDb() + binDb - src.powerDb(), -1);
+                fates[i] = new SourceFate(i, v, apparent[i], p.frequencyHz(), p.levelDb() + binDb - src.powerDb(), -1);
             } else if (bestTaken >= 0) {
                 SpectralPeak p = seen.get(bestTaken);
-                fates[i] = new SourceFate(i, Verdict.MERGES, apparent[i], p.frequency(),
+                fates[i] = new SourceFate(i, Verdict.MERGES, apparent[i], p.frequencyHz(),
                         p.levelDb() + binDb - src.powerDb(), claimedBy[bestTaken]);
             } else {
                 fates[i] = new SourceFate(i, Verdict.SUPPRESSED, apparent[i], Double.NaN, Double.NaN, -1);
@@ -123,9 +125,9 @@ public final class VerdictClassifier {
             SpectralPeak p = seen.get(j);
             int s = claimedBy[j];
             if (s < 0) {
-                observed.add(new ObservedPeak(p.frequency(), p.levelDb(), Verdict.UNEXPLAINED, -1, Double.NaN));
+                observed.add(new ObservedPeak(p.frequencyHz(), p.levelDb(), Verdict.UNEXPLAINED, -1, Double.NaN));
             } else {
-                observed.add(new ObservedPeak(p.frequency(), p.levelDb(), fates[s].verdict(), s, fates[s].gainDb()));
+                observed.add(new ObservedPeak(p.frequencyHz(), p.levelDb(), fates[s].verdict(), s, fates[s].gainDb()));
             }
         }
         return new RateResult(step, outputSamples, binWidth, observed, Arrays.asList(fates));
