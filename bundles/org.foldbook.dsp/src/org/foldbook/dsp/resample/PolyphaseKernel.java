@@ -48,6 +48,34 @@ final class PolyphaseKernel {
         this.stepRest = down % up;
     }
 
+    /**
+     * The polyphase form of a prototype low-pass FIR {@code g} running at the up-sampled rate up·fs0:
+     * y[m] = Σ_n x[n] · g[m·down − n·up + center] (zero-stuff by up, filter, keep every down-th sample),
+     * {@code g[center]} being the tap at zero delay so the output stays aligned with t_m = m·down/up.
+     */
+    static PolyphaseKernel fromPrototype(int up, int down, double[] g, int center) {
+        if (center < 0 || center >= g.length) {
+            throw new IllegalArgumentException("prototype centre " + center + " outside [0, " + g.length + ")");
+        }
+        int kMax = Math.floorDiv(g.length - 1 - center, up);
+        int kMin = -Math.floorDiv(center + up - 1, up);       // ceil((-center - (up-1)) / up)
+        int taps = kMax - kMin + 1;
+        if ((long) up * taps > MAX_TABLE) {
+            throw new IllegalArgumentException("polyphase table of " + up + " phases x " + taps + " taps exceeds "
+                    + MAX_TABLE + " coefficients");
+        }
+        double[] table = new double[up * taps];
+        for (int p = 0; p < up; p++) {
+            for (int i = 0; i < taps; i++) {
+                long j = p + (long) (kMax - i) * up + center;
+                if (j >= 0 && j < g.length) {
+                    table[p * taps + i] = g[(int) j];
+                }
+            }
+        }
+        return new PolyphaseKernel(up, down, taps, -kMax, table);
+    }
+
     int up() {
         return up;
     }

@@ -1,0 +1,72 @@
+package org.foldbook.dsp.resample;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Random;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+class KaiserPolyphaseResamplerTest {
+
+    @ParameterizedTest(name = "{0}/{1} equals scipy.signal.resample_poly with default arguments (poly_{0}_{1}.txt)")
+    @CsvSource({"1,2", "2,3", "3,7", "1,50", "7,5", "556,571", "19,1000", "5,1"})
+    void matchesScipyResamplePoly(int up, int down) {
+        String name = "poly_" + up + "_" + down + ".txt";
+        double[] expected = ReferenceVectors.column(name);
+        double[] x = ReferenceVectors.inputFor(name);
+        KaiserPolyphaseResampler r = KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(up, down));
+        double[] y = r.apply(x);
+        assertEquals(expected.length, y.length);
+        for (int m = 0; m < y.length; m++) {
+            assertEquals(expected[m], y[m], 1e-12, "output " + m);
+        }
+    }
+
+    @Test
+    void costIsAboutTwentyTapsPerInputSample() {
+        // scipy's design: 20·max(up,down)+1 prototype taps, so ≈ 20·down/up taps per output (peer README)
+        assertEquals(1001, KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(1, 50)).tapsPerOutput());
+        int t = KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(765, 1000)).tapsPerOutput();
+        assertTrue(t >= 26 && t <= 28, "taps " + t);
+    }
+
+    @Test
+    void streamingEqualsWhole() {
+        Random rnd = new Random(3);
+        double[] x = new double[30_000];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = rnd.nextGaussian();   // synthetic input
+        }
+        for (RateRatio q : new RateRatio[] {RateRatio.of(556, 571), RateRatio.of(1, 50), RateRatio.of(7, 5)}) {
+            KaiserPolyphaseResampler s = KaiserPolyphaseResampler.resamplePolyDefaults(q);
+            double[] whole = s.apply(x);
+            double[] got = new double[whole.length];
+            int[] pos = {0};
+            ResampleRun run = s.start((b, o, l) -> {
+                System.arraycopy(b, o, got, pos[0], l);
+                pos[0] += l;
+            });
+            for (int i = 0; i < x.length; i += 4093) {
+                run.push(x, i, Math.min(4093, x.length - i));
+            }
+            run.finish();
+            assertEquals(whole.length, pos[0]);
+            assertArrayEquals(whole, got, 0.0, q.toString());
+        }
+    }
+
+    @Test
+    void rejectsBadInput() {
+        KaiserPolyphaseResampler s = KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(2, 3));
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> s.apply(new double[] {Double.NaN}))
+                .getMessage().contains("samples[0]"));
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> s.apply(new double[0])).getMessage().contains("empty"));
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> KaiserPolyphaseResampler.firwinKaiser(10, 0.5, 5))
+                .getMessage().contains("odd"));
+    }
+}
