@@ -35,4 +35,11 @@ make f32-stereo       2 48000 floating-point  32
 make f32-4ch          4 22050 floating-point  32
 make f64-mono         1 48000 floating-point  64
 make f64-stereo       2 16000 floating-point  64
-ls -l "$OUT"
+# raw (headerless) copies of one layout for the raw-binary reader: big-endian int16 and little-endian float32
+RAW=bundles/org.foldbook.io.tests/resources/org/foldbook/io/raw/sox
+mkdir -p "$RAW"
+sox -D "$OUT/s24-stereo.wav" -t raw -e signed-integer -b 16 -B "$RAW/s16be-stereo.raw"
+sox -D -t raw -e signed-integer -b 16 -B -r 48000 -c 2 "$RAW/s16be-stereo.raw" -t raw -e floating-point -b 64 -L "$RAW/s16be-stereo.f64"
+sox -D "$OUT/f32-4ch.wav" -t raw -e floating-point -b 32 -L "$RAW/f32le-4ch.raw"
+cp "$OUT/f32-4ch.f64" "$RAW/f32le-4ch.f64"
+ls -l "$OUT" "$RAW"
