@@ -1,0 +1,110 @@
+package org.foldbook.dsp.filter;
+
+import org.foldbook.dsp.Check;
+
+/**
+ * Runs a {@link SecondOrderSections} filter over samples, carrying its state from one call to the
+ * next, so a long recording can be filtered block by block with the same result as in one go.
+ * Each section is the transposed direct form II (the structure of scipy.signal.sosfilt):
+ * {@code y = b0·x + s1; s1 = b1·x − a1·y + s2; s2 = b2·x − a2·y}.
+ *
+ * <p>Not thread-safe: one instance per stream. No allocation while filtering; a block is processed
+ * section by section with the coefficients and state in locals, which keeps the inner loop short.
+ * Non-finite input is rejected before anything is written.
+ */
+public final class SosFilter {
+
+    private final double[] c;
+    private final double[] state; // s1, s2 per section
+    private final int sections;
+
+    SosFilter(double[] coeffs) {
+        this.c = coeffs;
+        this.sections = coeffs.length / 6;
+        this.state = new double[2 * sections];
+    }
+
+    /** Clears the state (as if all earlier input had been zero). */
+    public void reset() {
+        java.util.Arrays.fill(state, 0);
+    }
+
+    /**
+     * Sets the state to the steady state of a constant input {@code level}, so filtering a record that
+     * starts at that level has no start-up transient (scipy: {@code sosfilt_zi(sos) * level}).
+     */
+    public void primeForConstantInput(double level) {
+        Check.finite("level", level);
+        double u = level;
+        for (int s = 0; s < sections; s++) {
+            int o = 6 * s;
+            double y = u * (c[o] + c[o + 1] + c[o + 2]) / (1 + c[o + 4] + c[o + 5]);
+            state[2 * s] = y - c[o] * u;
+            state[2 * s + 1] = c[o + 2] * u - c[o + 5] * y;
+            u = y;
+        }
+    }
+
+    /** Filters one sample. */
+    public double filterSample(double x) {
+        Check.finite("x", x);
+        double v = x;
+        for (int s = 0; s < sections; s++) {
+            int o = 6 * s;
+            double y = c[o] * v + state[2 * s];
+            state[2 * s] = c[o + 1] * v - c[o + 4] * y + state[2 * s + 1];
+            state[2 * s + 1] = c[o + 2] * v - c[o + 5] * y;
+            v = y;
+        }
+        return v;
+    }
+
+    /** Filters the whole array in place. */
+    public void filterInPlace(double[] data) {
+        if (data == null) {
+            throw new IllegalArgumentException("data must not be null");
+        }
+        filter(data, 0, data, 0, data.length);
+    }
+
+    /**
+     * Filters {@code length} samples from {@code in[inOffset…]} into {@code out[outOffset…]}. The
+     * two ranges may be the same range of the same array (in place) but must not otherwise overlap.
+     */
+    public void filter(double[] in, int inOffset, double[] out, int outOffset, int length) {
+        if (in == null || out == null) {
+            throw new IllegalArgumentException((in == null ? "in" : "out") + " must not be null");
+        }
+        Check.slice("in", in.length, inOffset, length);
+        Check.slice("out", out.length, outOffset, length);
+        for (int i = 0; i < length; i++) {
+            double x = in[inOffset + i];
+            if (!Double.isFinite(x)) {
+                throw new IllegalArgumentException("in[" + (inOffset + i) + "] must be finite, was " + x);
+            }
+        }
+        double[] src = in;
+        int srcOff = inOffset;
+        for (int s = 0; s < sections; s++) {
+            int o = 6 * s;
+            final double b0 = c[o];
+            final double b1 = c[o + 1];
+            final double b2 = c[o + 2];
+            final double a1 = c[o + 4];
+            final double a2 = c[o + 5];
+            double s1 = state[2 * s];
+            double s2 = state[2 * s + 1];
+            for (int i = 0; i < length; i++) {
+                double x = src[srcOff + i];
+                double y = b0 * x + s1;
+                s1 = b1 * x - a1 * y + s2;
+                s2 = b2 * x - a2 * y;
+                out[outOffset + i] = y;
+            }
+            state[2 * s] = s1;
+            state[2 * s + 1] = s2;
+            src = out;
+            srcOff = outOffset;
+        }
+    }
+}
