@@ -11,6 +11,7 @@ path in $PEER_SWEEP) on a small case and stores what the Java tests compare agai
   peer_details.json  per-rate peak lists of mode a (bare Kaiser-sinc sampler, W=16, beta=10) and
                      mode b (scipy.signal.resample_poly defaults), Welch PSD + find_peaks (10 dB)
   peer_run.json      the peer's one-line JSON summary (versions of numpy/scipy used, tone checks)
+  peer_grid_100.txt  the peer's default grid (100 rates, 100000..2000 S/s) for the ladder test
 
 Run with Debian's interpreter:  /usr/bin/python3 releng/reference/sweep_vectors.py
 """
@@ -40,6 +41,9 @@ def main():
     run = subprocess.run(cmd, check=True, capture_output=True, text=True)
     with open(os.path.join(OUT, "peer_run.json"), "w") as fh:
         fh.write(run.stdout)
+    subprocess.run(["/usr/bin/python3", PEER, "--samples", "4096", "--rates", "100", "--mode", "a",
+                    "--repeat", "1", "--write-grid", os.path.join(OUT, "peer_grid_100.txt")],
+                   check=True, capture_output=True)
     print("wrote", OUT)
 
 
