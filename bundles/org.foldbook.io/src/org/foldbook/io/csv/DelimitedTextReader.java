@@ -4,10 +4,8 @@ import java.io.BufferedInputStream;
 import java.io.FilterInputStream;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
 import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
-import java.nio.charset.CodingErrorAction;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.security.DigestInputStream;
@@ -106,8 +104,7 @@ public final class DelimitedTextReader implements RecordingReader {
         if (md != null) {
             in = new DigestInputStream(in, md);
         }
-        return new LineSource(file, new InputStreamReader(in, s.charset().newDecoder()
-                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT)));
+        return new LineSource(file, in, s.charset());
     }
 
     private static String nextContent(LineSource src) throws IOException {

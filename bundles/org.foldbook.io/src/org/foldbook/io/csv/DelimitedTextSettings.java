@@ -43,6 +43,10 @@ public record DelimitedTextSettings(Character separator, Character decimalSepara
         }
         Objects.requireNonNull(header, "header");
         Objects.requireNonNull(charset, "charset");
+        if (!LineSource.asciiCompatible(charset)) {
+            throw new IllegalArgumentException("charset: " + charset + " does not store CR, LF, digits and separators"
+                    + " as ASCII bytes (UTF-16/32 are not supported)");
+        }
         if (timeColumn < DETECT_TIME) {
             throw new IllegalArgumentException("timeColumn: " + timeColumn + " is below " + DETECT_TIME);
         }
