@@ -198,28 +198,10 @@ public class NotebookValidator extends EObjectValidator {
 	 * Validates the maxRatePositive constraint of '<em>Digitizer</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateDigitizer_maxRatePositive(Digitizer digitizer, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "maxRatePositive", getObjectLabel(digitizer, context) },
-						 new Object[] { digitizer },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.RateRules.digitizerMaxRate(digitizer, diagnostics, context);
 	}
 
 	/**
@@ -245,28 +227,10 @@ public class NotebookValidator extends EObjectValidator {
 	 * Validates the frameRatesPositive constraint of '<em>Camera</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateCamera_frameRatesPositive(Camera camera, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "frameRatesPositive", getObjectLabel(camera, context) },
-						 new Object[] { camera },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.RateRules.cameraFrameRates(camera, diagnostics, context);
 	}
 
 	/**
@@ -292,28 +256,10 @@ public class NotebookValidator extends EObjectValidator {
 	 * Validates the validityOrdered constraint of '<em>Rig</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateRig_validityOrdered(Rig rig, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "validityOrdered", getObjectLabel(rig, context) },
-						 new Object[] { rig },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.RigDateRules.validityOrdered(rig, diagnostics, context);
 	}
 
 	/**
@@ -342,112 +288,40 @@ public class NotebookValidator extends EObjectValidator {
 	 * Validates the hasSamplingStage constraint of '<em>Signal Chain</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateSignalChain_hasSamplingStage(SignalChain signalChain, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "hasSamplingStage", getObjectLabel(signalChain, context) },
-						 new Object[] { signalChain },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.ChainRules.hasSamplingStage(signalChain, diagnostics, context);
 	}
 
 	/**
 	 * Validates the filterCutoffBelowNyquist constraint of '<em>Signal Chain</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateSignalChain_filterCutoffBelowNyquist(SignalChain signalChain, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "filterCutoffBelowNyquist", getObjectLabel(signalChain, context) },
-						 new Object[] { signalChain },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.ChainRules.filterCutoffBelowNyquist(signalChain, diagnostics, context);
 	}
 
 	/**
 	 * Validates the sensorBandProtected constraint of '<em>Signal Chain</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateSignalChain_sensorBandProtected(SignalChain signalChain, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "sensorBandProtected", getObjectLabel(signalChain, context) },
-						 new Object[] { signalChain },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.ChainRules.sensorBandProtected(signalChain, diagnostics, context);
 	}
 
 	/**
 	 * Validates the exposureFitsFramePeriod constraint of '<em>Signal Chain</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateSignalChain_exposureFitsFramePeriod(SignalChain signalChain, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "exposureFitsFramePeriod", getObjectLabel(signalChain, context) },
-						 new Object[] { signalChain },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.ChainRules.exposureFitsFramePeriod(signalChain, diagnostics, context);
 	}
 
 	/**
@@ -473,28 +347,10 @@ public class NotebookValidator extends EObjectValidator {
 	 * Validates the ratePositive constraint of '<em>Stage</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateStage_ratePositive(Stage stage, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "ratePositive", getObjectLabel(stage, context) },
-						 new Object[] { stage },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.RateRules.stageRate(stage, diagnostics, context);
 	}
 
 	/**
@@ -520,28 +376,10 @@ public class NotebookValidator extends EObjectValidator {
 	 * Validates the rigValidOnDate constraint of '<em>Experiment</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateExperiment_rigValidOnDate(Experiment experiment, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "rigValidOnDate", getObjectLabel(experiment, context) },
-						 new Object[] { experiment },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.RigDateRules.rigValidOnDate(experiment, diagnostics, context);
 	}
 
 	/**
@@ -568,56 +406,20 @@ public class NotebookValidator extends EObjectValidator {
 	 * Validates the indexInsideRecording constraint of '<em>Channel</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateChannel_indexInsideRecording(Channel channel, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "indexInsideRecording", getObjectLabel(channel, context) },
-						 new Object[] { channel },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.ChannelRules.indexInsideRecording(channel, diagnostics, context);
 	}
 
 	/**
 	 * Validates the unitMatchesSensor constraint of '<em>Channel</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateChannel_unitMatchesSensor(Channel channel, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "unitMatchesSensor", getObjectLabel(channel, context) },
-						 new Object[] { channel },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.ChannelRules.unitMatchesSensor(channel, diagnostics, context);
 	}
 
 	/**
@@ -644,56 +446,20 @@ public class NotebookValidator extends EObjectValidator {
 	 * Validates the declaredRatePositive constraint of '<em>Recording</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateRecording_declaredRatePositive(Recording recording, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "declaredRatePositive", getObjectLabel(recording, context) },
-						 new Object[] { recording },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.RateRules.recordingRate(recording, diagnostics, context);
 	}
 
 	/**
 	 * Validates the fileMatchesChecksum constraint of '<em>Recording</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateRecording_fileMatchesChecksum(Recording recording, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "fileMatchesChecksum", getObjectLabel(recording, context) },
-						 new Object[] { recording },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.RecordingFileRule.fileMatchesChecksum(recording, diagnostics, context);
 	}
 
 	/**
@@ -719,28 +485,10 @@ public class NotebookValidator extends EObjectValidator {
 	 * Validates the ratesPositive constraint of '<em>Sweep Plan</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @generated
+	 * @generated NOT
 	 */
 	public boolean validateSweepPlan_ratesPositive(SweepPlan sweepPlan, DiagnosticChain diagnostics, Map<Object, Object> context) {
-		// TODO implement the constraint
-		// -> specify the condition that violates the constraint
-		// -> verify the diagnostic details, including severity, code, and message
-		// Ensure that you remove @generated or mark it @generated NOT
-		if (false) {
-			if (diagnostics != null) {
-				diagnostics.add
-					(createDiagnostic
-						(Diagnostic.ERROR,
-						 DIAGNOSTIC_SOURCE,
-						 0,
-						 "_UI_GenericConstraint_diagnostic",
-						 new Object[] { "ratesPositive", getObjectLabel(sweepPlan, context) },
-						 new Object[] { sweepPlan },
-						 context));
-			}
-			return false;
-		}
-		return true;
+		return org.foldbook.model.validation.RateRules.sweepPlanRates(sweepPlan, diagnostics, context);
 	}
 
 	/**

@@ -1,0 +1,185 @@
+package org.foldbook.model.derived;
+
+import java.util.Optional;
+
+import org.foldbook.dsp.filter.AnalogLowPass;
+import org.foldbook.dsp.filter.BesselNormalization;
+import org.foldbook.dsp.filter.FrequencyResponse;
+import org.foldbook.model.AntiAliasFilter;
+import org.foldbook.model.Amplifier;
+import org.foldbook.model.Camera;
+import org.foldbook.model.Device;
+import org.foldbook.model.Digitizer;
+import org.foldbook.model.FilterFamily;
+import org.foldbook.model.Sensor;
+import org.foldbook.model.SignalChain;
+import org.foldbook.model.Stage;
+
+/**
+ * Figures computed from a signal chain's stages and devices. None of them is stored in the
+ * notebook: the generated derived operations of {@link SignalChain} and the validation rules call
+ * these, so a changed setting is reflected at once. Filter responses come from
+ * {@code org.foldbook.dsp.filter}.
+ */
+public final class ChainFigures {
+
+    private ChainFigures() {
+    }
+
+    /** The last stage whose device samples (digitizer or camera), or null. */
+    public static Stage samplingStage(SignalChain chain) {
+        Stage found = null;
+        for (Stage stage : chain.getStages()) {
+            if (stage.getDevice() instanceof Digitizer || stage.getDevice() instanceof Camera) {
+                found = stage;
+            }
+        }
+        return found;
+    }
+
+    /**
+     * Sampling (or frame) rate of the chain in Hz: the stage's own setting, else the digitizer's
+     * maximum rate or the camera's first frame rate; NaN without a sampling stage or any rate.
+     */
+    public static double samplingRateHz(SignalChain chain) {
+        Stage stage = samplingStage(chain);
+        if (stage == null) {
+            return Double.NaN;
+        }
+        if (stage.getRateHz() != null) {
+            return stage.getRateHz();
+        }
+        Device device = stage.getDevice();
+        if (device instanceof Digitizer digitizer) {
+            return digitizer.getMaxRateHz();
+        }
+        Camera camera = (Camera) device;
+        return camera.getFrameRatesHz().isEmpty() ? Double.NaN : camera.getFrameRatesHz().get(0);
+    }
+
+    /** Half the sampling rate (Nyquist frequency), NaN when the rate is unknown. */
+    public static double nyquistHz(SignalChain chain) {
+        return samplingRateHz(chain) / 2.0;
+    }
+
+    /** The first stage holding a sensor, or null. */
+    public static Stage sensorStage(SignalChain chain) {
+        for (Stage stage : chain.getStages()) {
+            if (stage.getDevice() instanceof Sensor) {
+                return stage;
+            }
+        }
+        return null;
+    }
+
+    /** The first stage holding an analog anti-alias filter whose family is not NONE, or null. */
+    public static Stage filterStage(SignalChain chain) {
+        for (Stage stage : chain.getStages()) {
+            if (stage.getDevice() instanceof AntiAliasFilter filter && filter.getFamily() != FilterFamily.NONE) {
+                return stage;
+            }
+        }
+        return null;
+    }
+
+    /** Cutoff in effect at a filter stage: the stage setting, else the device's own cutoff. */
+    public static double effectiveCutoffHz(Stage filterStage) {
+        AntiAliasFilter filter = (AntiAliasFilter) filterStage.getDevice();
+        return filterStage.getCutoffHz() != null ? filterStage.getCutoffHz() : filter.getCutoffHz();
+    }
+
+    /** True when the sampling device filters digitally before decimating (delta-sigma digitizers). */
+    public static boolean hasBuiltInDigitalFilter(SignalChain chain) {
+        Stage stage = samplingStage(chain);
+        return stage != null && stage.getDevice() instanceof Digitizer digitizer && digitizer.isDigitalFilter();
+    }
+
+    /**
+     * Highest frequency the front end passes: the sensor's usable maximum or its resonance,
+     * whichever is higher (a resonance is a strong peak, so it counts), limited by an amplifier's
+     * upper bandwidth when one is given. NaN when the sensor states neither.
+     */
+    public static double frontEndUpperHz(SignalChain chain) {
+        Stage stage = sensorStage(chain);
+        if (stage == null) {
+            return Double.NaN;
+        }
+        Sensor sensor = (Sensor) stage.getDevice();
+        double upper = Double.NaN;
+        if (sensor.getUsableMaxHz() != null) {
+            upper = sensor.getUsableMaxHz();
+        }
+        if (sensor.getResonanceHz() != null) {
+            upper = Double.isNaN(upper) ? sensor.getResonanceHz() : Math.max(upper, sensor.getResonanceHz());
+        }
+        for (Stage other : chain.getStages()) {
+            if (other.getDevice() instanceof Amplifier amplifier && amplifier.getBandwidthHighHz() != null) {
+                upper = Math.min(upper, amplifier.getBandwidthHighHz());
+            }
+        }
+        return upper;
+    }
+
+    /**
+     * Where front-end content above Nyquist lands after sampling: content in (fs/2, upper] appears
+     * at |f − k·fs| (k = round(f/fs), Oppenheim and Schafer ch. 4), i.e. in [fs − upper, fs/2] when
+     * upper &lt; fs and anywhere in [0, fs/2] otherwise. Empty when nothing lies above Nyquist.
+     */
+    public static Optional<Band> foldedBandHz(double upperHz, double samplingRateHz) {
+        double nyquist = samplingRateHz / 2.0;
+        if (!(upperHz > nyquist)) {
+            return Optional.empty();
+        }
+        double low = upperHz >= samplingRateHz ? 0.0 : samplingRateHz - upperHz;
+        return Optional.of(new Band(low, nyquist));
+    }
+
+    /**
+     * Magnitude response of the stage's analog filter, built with {@code org.foldbook.dsp.filter};
+     * empty when the family is NONE/UNKNOWN or the parameters needed for the family are missing.
+     * Bessel cutoffs are taken as −3 dB points, as data sheets usually quote them (common practice).
+     */
+    public static Optional<FrequencyResponse> filterResponse(Stage filterStage) {
+        AntiAliasFilter filter = (AntiAliasFilter) filterStage.getDevice();
+        double cutoff = effectiveCutoffHz(filterStage);
+        int order = filter.getOrder();
+        if (!(cutoff > 0)) {
+            return Optional.empty();
+        }
+        return switch (filter.getFamily()) {
+            case RC -> Optional.of(AnalogLowPass.rc(cutoff));
+            case BUTTERWORTH -> order > 0 ? Optional.of(AnalogLowPass.butterworth(order, cutoff)) : Optional.empty();
+            case BESSEL -> order > 0
+                    ? Optional.of(AnalogLowPass.bessel(order, cutoff, BesselNormalization.MAGNITUDE))
+                    : Optional.empty();
+            case CHEBYSHEV_I -> order > 0 && filter.getRippleDb() != null
+                    ? Optional.of(AnalogLowPass.chebyshev1(order, filter.getRippleDb(), cutoff))
+                    : Optional.empty();
+            case ELLIPTIC -> order > 0 && filter.getRippleDb() != null && filter.getStopbandDb() != null
+                    ? Optional.of(AnalogLowPass.elliptic(order, filter.getRippleDb(), filter.getStopbandDb(), cutoff))
+                    : Optional.empty();
+            case NONE, UNKNOWN -> Optional.empty();
+        };
+    }
+
+    /**
+     * Attenuation (dB) of the chain's analog filter at the Nyquist frequency: how much the content
+     * that would fold first is pushed down. Empty without a usable filter model or a known rate.
+     */
+    public static Optional<Double> filterAttenuationAtNyquistDb(SignalChain chain) {
+        Stage stage = filterStage(chain);
+        double nyquist = nyquistHz(chain);
+        if (stage == null || Double.isNaN(nyquist)) {
+            return Optional.empty();
+        }
+        return filterResponse(stage).map(response -> response.attenuationDb(nyquist));
+    }
+
+    /** A closed frequency band in Hz. */
+    public record Band(double lowHz, double highHz) {
+        @Override
+        public String toString() {
+            return String.format(java.util.Locale.ROOT, "%.6g–%.6g Hz", lowHz, highHz);
+        }
+    }
+}
