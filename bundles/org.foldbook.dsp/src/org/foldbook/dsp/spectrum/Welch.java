@@ -30,31 +30,21 @@ import org.foldbook.dsp.window.WindowShape;
  */
 public final class Welch {
     private final Window window;
-    private final double[] w;
     private final int n;
     private final int overlap;
     private final Detrend detrend;
     private final PsdScaling scaling;
     private final RealFft fft;
-    // Linear detrend: t_j = j - (n-1)/2 centres the fit, so mean and slope decouple.
-    private final double tCentre;
-    private final double sumT2;
+    private final WindowedSegment segment;
 
     private Welch(Window window, int overlap, Detrend detrend, PsdScaling scaling) {
         this.window = window;
-        this.w = window.toArray();
-        this.n = w.length;
+        this.n = window.length();
         this.overlap = overlap;
         this.detrend = detrend;
         this.scaling = scaling;
         this.fft = RealFft.of(n);
-        this.tCentre = (n - 1) / 2.0;
-        double s = 0;
-        for (int j = 0; j < n; j++) {
-            double t = j - tCentre;
-            s += t * t;
-        }
-        this.sumT2 = s;
+        this.segment = new WindowedSegment(window, detrend);
     }
 
     /** A builder for segments of {@code segmentLength >= 1} samples. */
@@ -146,7 +136,7 @@ public final class Welch {
         int step = step();
         for (int s = 0; s < segments; s++) {
             int start = offset + s * step;
-            windowSegment(x, start, buf);
+            segment.prepare(x, start, buf);
             fft.accumulatePowerInPlace(buf, out);
         }
         double c = scaling == PsdScaling.DENSITY ? 1.0 / (sampleRate * window.sumOfSquares())
@@ -162,60 +152,6 @@ public final class Welch {
             out[n / 2] *= c;
         }
         return segments;
-    }
-
-    /** {@code buf[j] = (x[start+j] - trend_j) * w[j]}: detrend fused with windowing, two passes over x. */
-    private void windowSegment(double[] x, int start, double[] buf) {
-        switch (detrend) {
-            case NONE -> {
-                double probe = 0;
-                for (int j = 0; j < n; j++) {
-                    double v = x[start + j];
-                    probe += v * 0.0;
-                    buf[j] = v * w[j];
-                }
-                requireFinite(probe, x, start);
-            }
-            case CONSTANT -> {
-                double sum = 0;
-                for (int j = 0; j < n; j++) {
-                    sum += x[start + j];
-                }
-                double mean = sum / n;
-                requireFinite(mean * 0.0, x, start);
-                for (int j = 0; j < n; j++) {
-                    buf[j] = (x[start + j] - mean) * w[j];
-                }
-            }
-            case LINEAR -> {
-                double sum = 0;
-                double sumTx = 0;
-                for (int j = 0; j < n; j++) {
-                    double v = x[start + j];
-                    sum += v;
-                    sumTx += (j - tCentre) * v;
-                }
-                double mean = sum / n;
-                double slope = sumT2 > 0 ? sumTx / sumT2 : 0.0;
-                requireFinite(mean * 0.0 + slope * 0.0, x, start);
-                for (int j = 0; j < n; j++) {
-                    buf[j] = (x[start + j] - mean - slope * (j - tCentre)) * w[j];
-                }
-            }
-            default -> throw new IllegalStateException(String.valueOf(detrend));
-        }
-    }
-
-    private void requireFinite(double probe, double[] x, int start) {
-        if (probe != 0) {
-            for (int j = start; j < start + n; j++) {
-                if (!Double.isFinite(x[j])) {
-                    throw new IllegalArgumentException("x[" + j + "] must be finite, was " + x[j]);
-                }
-            }
-            throw new IllegalArgumentException("x[" + start + " .. " + (start + n - 1)
-                    + "] is too large to sum in double precision");
-        }
     }
 
     /** Scratch for {@link #psdInto}: one per thread, reusable across operators of segment length <= capacity. */

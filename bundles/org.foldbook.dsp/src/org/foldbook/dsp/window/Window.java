@@ -10,7 +10,8 @@ import org.foldbook.dsp.fft.RealFft;
  * <li>equivalent noise bandwidth in bins {@code ENBW = n sum(w^2) / sum(w)^2};</li>
  * <li>scalloping loss {@code -20 log10(|W(1/2)| / W(0))}, a positive dB figure, with
  * {@code W(nu) = sum_j w[j] exp(-2 pi i nu j / n)}, nu in bins;</li>
- * <li>highest sidelobe {@code 20 log10(max |W(nu)| / W(0))} beyond the first minimum of {@code |W|}, from a
+ * <li>highest sidelobe {@code 20 log10(max |W(nu)| / W(0))} beyond the main lobe (which ends at the first
+ * minimum of {@code |W|} below -20 dB), from a
  * zero-padded FFT of the window refined by a direct evaluation of {@code W(nu)} (negative dB).</li>
  * </ul>
  * The figures are computed on first request and cached.
@@ -149,14 +150,18 @@ public final class Window {
             mag[j] = Math.sqrt(mag[j]);
         }
         double step = (double) n / len; // bins per grid point
-        int edge = 1;
-        while (edge < mag.length && mag[edge] <= mag[edge - 1]) {
-            edge++;
+        // End of the main lobe: the first local minimum of |W| below -20 dB (flat-top windows ripple by
+        // hundredths of a dB across their top, so a plain first minimum would stop inside the main lobe).
+        int edge = -1;
+        for (int j = 1; j + 1 < mag.length; j++) {
+            if (mag[j] <= mag[j - 1] && mag[j] <= mag[j + 1] && mag[j] < 0.1 * mag[0]) {
+                edge = j;
+                break;
+            }
         }
-        if (edge >= mag.length) {
+        if (edge < 0) {
             return new WindowMetrics(coherentGain(), enbwBins(), scallop, Double.NaN, Double.NaN);
         }
-        edge--; // first local minimum of |W| on the grid: end of the main lobe
         double best = 0;
         double bestNu = Double.NaN;
         // Refine the three highest grid maxima beyond the main lobe by golden-section search.
