@@ -58,7 +58,7 @@ public final class Hdf5Reader implements RecordingReader {
 
     public static Hdf5Reader open(Path file, Hdf5Selection selection, ReadOptions options) throws IOException {
         FileChannel ch = FileChannel.open(file, StandardOpenOption.READ);
-        HdfFile hdf = null;
+        HdfFile hdf;
         try {
             try {
                 hdf = new HdfFile(ch);
@@ -67,13 +67,6 @@ public final class Hdf5Reader implements RecordingReader {
             }
             return describe(file, ch, hdf, selection, options);
         } catch (IOException | RuntimeException e) {
-            if (hdf != null) {
-                try {
-                    hdf.close();
-                } catch (RuntimeException ignored) {
-                    // the original error matters more
-                }
-            }
             ch.close();
             if (e instanceof RuntimeException r) {
                 throw new RecordingFormatException(file, "metadata", "HDF5 structure not readable: " + r, r);
@@ -304,12 +297,8 @@ public final class Hdf5Reader implements RecordingReader {
 
     @Override
     public void close() throws IOException {
-        try {
-            hdf.close();
-        } catch (RuntimeException e) {
-            throw new IOException("closing " + info.file() + ": " + e, e);
-        } finally {
-            channel.close();
-        }
+        // jhdf treats a file opened from our channel like an in-memory one and refuses close();
+        // the channel is ours, and closing it releases the file
+        channel.close();
     }
 }
