@@ -46,6 +46,14 @@ class PeerAgreementTest {
         assertSameAsPeer(r, MiniJson.arr(details.get("a")));
     }
 
+    @Test
+    @DisplayName("peer-poly mode: every rate's peaks = peer mode b (scipy.signal.resample_poly defaults)")
+    void peerPolyModeMatchesPeerModeB() {
+        SweepResult r = engine.run(signal, grid, Resampling.peerResamplePoly(), SpectrumSettings.DEFAULT,
+                SweepProgress.NONE);
+        assertSameAsPeer(r, MiniJson.arr(details.get("b")));
+    }
+
     static void assertSameAsPeer(SweepResult r, List<Object> peer) {
         assertEquals(peer.size(), r.rates().size(), "rate count");
         int compared = 0;

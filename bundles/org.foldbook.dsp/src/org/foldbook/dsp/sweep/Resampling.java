@@ -5,6 +5,7 @@ import java.util.Objects;
 import org.foldbook.dsp.filter.AnalogFilter;
 import org.foldbook.dsp.filter.SecondOrderSections;
 import org.foldbook.dsp.resample.BareSampler;
+import org.foldbook.dsp.resample.KaiserPolyphaseResampler;
 import org.foldbook.dsp.resample.Resampler;
 
 /**
@@ -46,6 +47,56 @@ public interface Resampling {
      */
     static Resampling modelledFilter(AnalogFilter filter) {
         return new ModelledFilter(filter);
+    }
+
+    /**
+     * The peer-compatible filtered mode: scipy.signal.resample_poly's default design (Kaiser β = 5,
+     * 20·max(up, down)+1 taps, see {@link KaiserPolyphaseResampler#resamplePolyDefaults}), so its per-rate
+     * peaks can be compared with the peer's mode b bin for bin.
+     */
+    static Resampling peerResamplePoly() {
+        return PeerResamplePoly.INSTANCE;
+    }
+
+    /** scipy's resample_poly defaults. */
+    final class PeerResamplePoly implements Resampling {
+        static final PeerResamplePoly INSTANCE = new PeerResamplePoly();
+        // |H| of that design in dB at fractions of the new rate (scipy.signal.freqz for R = 20, as
+        // documented with KaiserPolyphaseResampler); beyond 0.6 the stop band lies near -65 dB.
+        private static final double[] AT = {0.0, 0.40, 0.45, 0.50, 0.55, 0.60, 0.65};
+        private static final double[] DB = {0.0, 0.0, -0.66, -6.0, -22.6, -55.0, -65.0};
+
+        private PeerResamplePoly() {
+        }
+
+        @Override
+        public String name() {
+            return "peer-poly";
+        }
+
+        @Override
+        public Resampler forRate(RateStep step) {
+            return KaiserPolyphaseResampler.resamplePolyDefaults(step.ratio());
+        }
+
+        /** Piecewise-linear dB model of the design's response, tabulated at fractions of the new rate. */
+        @Override
+        public double powerGain(double frequencyHz, RateStep step) {
+            if (step.up() == 1 && step.down() == 1) {
+                return 1.0;
+            }
+            double u = Math.abs(frequencyHz) / step.effectiveRate();
+            if (u >= AT[AT.length - 1]) {
+                return Math.pow(10, DB[DB.length - 1] / 10);
+            }
+            int i = 1;
+            while (u > AT[i]) {
+                i++;
+            }
+            double t = (u - AT[i - 1]) / (AT[i] - AT[i - 1]);
+            double db = DB[i - 1] + t * (DB[i] - DB[i - 1]);
+            return Math.pow(10, db / 10);
+        }
     }
 
     /** The bare sampler. */

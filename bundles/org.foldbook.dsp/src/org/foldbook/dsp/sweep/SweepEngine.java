@@ -19,6 +19,7 @@ import org.foldbook.dsp.Check;
 import org.foldbook.dsp.peaks.PeakFinder;
 import org.foldbook.dsp.peaks.SpectralPeak;
 import org.foldbook.dsp.resample.BareSampler;
+import org.foldbook.dsp.resample.KaiserPolyphaseResampler;
 import org.foldbook.dsp.resample.ResampleRun;
 import org.foldbook.dsp.resample.Resampler;
 import org.foldbook.dsp.spectrum.Welch;
@@ -148,14 +149,20 @@ public final class SweepEngine implements AutoCloseable {
         Welch welch = welchBySegment.computeIfAbsent(seg, s -> Welch.builder(s).build());
         ws.welch.reset(welch, fs);
         Resampler resampler = mode.forRate(step);
+        RandomAccess direct = null;
         if (resampler instanceof BareSampler bare) {
+            direct = bare::evaluate;
+        } else if (resampler instanceof KaiserPolyphaseResampler poly) {
+            direct = poly::evaluate;
+        }
+        if (direct != null) {
             // random access straight from the shared array into the Welch buffer: no input copy per rate
             for (long first = 0; first < m; first += BLOCK) {
                 if (progress.isCancelled()) {
                     throw new CancellationException("sweep cancelled");
                 }
                 int count = (int) Math.min(BLOCK, m - first);
-                bare.evaluate(x, first, ws.block, 0, count);
+                direct.evaluate(x, first, ws.block, 0, count);
                 ws.welch.accept(ws.block, 0, count);
             }
         } else {
@@ -172,6 +179,12 @@ public final class SweepEngine implements AutoCloseable {
         double binWidth = fs / seg;
         List<SpectralPeak> peaks = finder.findInPower(ws.psd, welch.bins(), binWidth);
         return classifier.classify(step, m, binWidth, peaks);
+    }
+
+    /** Re-samplers that can compute any range of outputs from the whole input (no streaming state). */
+    @FunctionalInterface
+    private interface RandomAccess {
+        void evaluate(double[] samples, long first, double[] out, int outOffset, int count);
     }
 
     /** Per-thread buffers, reused from rate to rate. */
