@@ -27,18 +27,18 @@ public final class NoiseFloor {
         }
         double[] floor = new double[count];
         int h = window / 2;
-        double[] sorted = new double[window];
+        double[] sorted = new double[Math.min(window, count) + 1];
         int size = 0;
         int lo = 0; // x[lo .. hi) is in the sorted window
         int hi = 0;
         for (int k = 0; k < count; k++) {
             int wantLo = Math.max(0, k - h);
             int wantHi = Math.min(count, k + h + 1);
-            while (hi < wantHi) {
-                size = insert(sorted, size, x[hi++]);
-            }
             while (lo < wantLo) {
                 size = remove(sorted, size, x[lo++]);
+            }
+            while (hi < wantHi) {
+                size = insert(sorted, size, x[hi++]);
             }
             floor[k] = (size & 1) == 1 ? sorted[size / 2] : 0.5 * (sorted[size / 2 - 1] + sorted[size / 2]);
         }
