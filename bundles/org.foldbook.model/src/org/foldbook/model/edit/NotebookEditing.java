@@ -1,7 +1,6 @@
 package org.foldbook.model.edit;
 
 import org.eclipse.emf.common.command.BasicCommandStack;
-import org.eclipse.emf.ecore.resource.ResourceSet;
 import org.eclipse.emf.edit.domain.AdapterFactoryEditingDomain;
 import org.eclipse.emf.edit.provider.ComposedAdapterFactory;
 import org.eclipse.emf.edit.provider.ReflectiveItemProviderAdapterFactory;
@@ -18,16 +17,17 @@ public final class NotebookEditing {
     private NotebookEditing() {
     }
 
-    /** A domain over a new notebook resource set ({@link NotebookStore#newResourceSet()}). */
+    /**
+     * A domain with its own resource set, set up for notebooks ({@link NotebookStore#configure}); the
+     * set knows its domain, so {@code AdapterFactoryEditingDomain.getEditingDomainFor(object)} works.
+     * Dispose the domain's adapter factory when the editor closes.
+     */
     public static AdapterFactoryEditingDomain newEditingDomain() {
-        return newEditingDomain(NotebookStore.newResourceSet());
-    }
-
-    /** A domain over {@code resourceSet}; dispose its adapter factory when the editor closes. */
-    public static AdapterFactoryEditingDomain newEditingDomain(ResourceSet resourceSet) {
         ComposedAdapterFactory adapters = new ComposedAdapterFactory(ComposedAdapterFactory.Descriptor.Registry.INSTANCE);
         adapters.addAdapterFactory(new ResourceItemProviderAdapterFactory());
         adapters.addAdapterFactory(new ReflectiveItemProviderAdapterFactory());
-        return new AdapterFactoryEditingDomain(adapters, new BasicCommandStack(), resourceSet);
+        AdapterFactoryEditingDomain domain = new AdapterFactoryEditingDomain(adapters, new BasicCommandStack());
+        NotebookStore.configure(domain.getResourceSet());
+        return domain;
     }
 }

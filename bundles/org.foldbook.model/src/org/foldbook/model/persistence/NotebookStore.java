@@ -47,7 +47,11 @@ public final class NotebookStore {
 
     /** A resource set that reads and writes notebooks without the Eclipse extension registry. */
     public static ResourceSet newResourceSet() {
-        ResourceSet resourceSet = new ResourceSetImpl();
+        return configure(new ResourceSetImpl());
+    }
+
+    /** Registers the notebook factory (extension, content type) and package in {@code resourceSet}. */
+    public static ResourceSet configure(ResourceSet resourceSet) {
         NotebookResourceFactory factory = new NotebookResourceFactory();
         resourceSet.getResourceFactoryRegistry().getExtensionToFactoryMap().put(FILE_EXTENSION, factory);
         resourceSet.getResourceFactoryRegistry().getContentTypeToFactoryMap().put(CONTENT_TYPE, factory);
@@ -55,9 +59,11 @@ public final class NotebookStore {
         return resourceSet;
     }
 
-    /** A new, empty notebook resource that will be saved at {@code file}. */
+    /** A new, empty notebook resource that will be saved at {@code file}, whatever its file name. */
     public static Resource createResource(ResourceSet resourceSet, Path file) {
-        return resourceSet.createResource(fileUri(file));
+        Resource resource = new NotebookResourceFactory().createResource(fileUri(file));
+        resourceSet.getResources().add(resource);
+        return resource;
     }
 
     /** Reads the notebook in {@code file} into a new resource set. */
@@ -70,7 +76,7 @@ public final class NotebookStore {
         if (!Files.isRegularFile(file)) {
             throw new NotebookLoadException(file, 0, 0, "no such file", null);
         }
-        Resource resource = resourceSet.createResource(fileUri(file));
+        Resource resource = createResource(resourceSet, file); // also a .bak or any other name
         try {
             resource.load(null);
         } catch (IOException | RuntimeException e) {

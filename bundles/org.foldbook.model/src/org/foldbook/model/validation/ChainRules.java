@@ -72,7 +72,7 @@ public final class ChainRules {
         }
         return report(diagnostics, Diagnostic.WARNING, UNPROTECTED_BAND_FOLDS, chain,
                 "no anti-alias filter, and the front end passes up to " + hz(upper) + ": content from "
-                        + hz(rate / 2) + " to " + hz(upper) + " will fold into " + folded.get()
+                        + hz(rate / 2) + " to " + hz(upper) + " will fold into " + hz(folded.get().lowHz()) + " to " + hz(folded.get().highHz())
                         + " at " + hz(rate),
                 "Add a low-pass filter with its cutoff below " + hz(rate / 2) + ", or sample above "
                         + hz(2 * upper));
