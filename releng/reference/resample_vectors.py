@@ -17,6 +17,10 @@ What is written:
   bare_U_D.txt           windowed-sinc evaluation of input at t_m = m*D/U, evaluated per output
                          sample straight from the formula (numpy sinc, scipy.special.i0), W=16, beta=10
   poly_U_D.txt           scipy.signal.resample_poly(input, U, D) with its defaults
+  kaiserord.txt          A width -> scipy.signal.kaiserord(A, width) numtaps, beta (width re Nyquist)
+  firwin_kaiser.txt      scipy.signal.firwin(numtaps, cutoff, window=('kaiser', kaiser_beta(A))) for a
+                         low-pass of rate 1, pass 0.2, stop 0.25, A = 100 dB; numtaps = M+1 with
+                         M = ceil((A-8)/(2.285*dw)) raised to even (Oppenheim & Schafer 7.6)
 """
 import os
 from fractions import Fraction
@@ -84,6 +88,22 @@ def i0_table():
     write("i0.txt", ["%r %s" % (x, g17(sp.i0(x))) for x in xs], "x scipy.special.i0(x)")
 
 
+def kaiser_tables():
+    rows = []
+    for a, w in ((105, 0.05), (105, 0.1), (60, 0.02), (120, 0.3), (40, 0.1), (30, 0.2), (103, 0.01)):
+        nt, beta = ss.kaiserord(a, w)
+        rows.append("%r %r %d %s" % (float(a), float(w), nt, g17(beta)))
+    write("kaiserord.txt", rows, "A width numtaps beta from scipy.signal.kaiserord(A, width)")
+    rate, fp, fst, a = 1.0, 0.2, 0.25, 100.0
+    dw = 2 * np.pi * (fst - fp) / rate
+    m = int(np.ceil((a - 8) / (2.285 * dw)))
+    m += m % 2
+    h = ss.firwin(m + 1, 0.5 * (fp + fst) / (rate / 2), window=("kaiser", ss.kaiser_beta(a)))
+    write("firwin_kaiser.txt", ["# numtaps %d" % (m + 1)] + [g17(v) for v in h],
+          "scipy.signal.firwin(%d, %r, window=('kaiser', %r)): rate 1, pass 0.2, stop 0.25, 100 dB"
+          % (m + 1, 0.5 * (fp + fst) / (rate / 2), ss.kaiser_beta(a)))
+
+
 def synthetic_input(n):
     """Clearly synthetic input: three tones (one near 0.42 of the rate) plus seeded Gaussian noise."""
     t = np.arange(n, dtype=np.float64)
@@ -120,6 +140,7 @@ def main():
     limit_denominator_cases()
     rate_grid()
     i0_table()
+    kaiser_tables()
     x = synthetic_input(1000)
     write("input.txt", [g17(v) for v in x],
           "synthetic input, 1000 samples: sin(2pi 0.013 n + 0.1) + 0.5 sin(2pi 0.137 n + 0.7) "
