@@ -132,6 +132,27 @@ class RealFftTest {
         assertTrue(e.getMessage().contains("threads"), e.getMessage());
     }
 
+    @ParameterizedTest(name = "n = {0}")
+    @ValueSource(ints = {2, 3, 8, 45, 97, 1024, 4096, 4099})
+    @DisplayName("in-place paths reject a NaN or infinity at any position (detected from the DC bin)")
+    void inPlaceRejectsNonFinite(int n) {
+        RealFft fft = RealFft.of(n);
+        double[] p = new double[fft.bins()];
+        double[] re = new double[fft.bins()];
+        double[] im = new double[fft.bins()];
+        double[] bads = {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY};
+        for (int pos : new int[] {0, 1, n / 3, n / 2, n - 1}) {
+            for (double bad : bads) {
+                double[] x = randomSignal(n, pos);
+                x[pos] = bad;
+                IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                        () -> fft.accumulatePowerInPlace(x.clone(), p), "pos " + pos + " " + bad);
+                assertTrue(e.getMessage().contains("work"), e.getMessage());
+                assertThrows(IllegalArgumentException.class, () -> fft.forwardInPlace(x.clone(), re, im));
+            }
+        }
+    }
+
     @Test
     @DisplayName("one operator shared by threads gives the same result as on one thread")
     void sharedAcrossThreads() throws Exception {

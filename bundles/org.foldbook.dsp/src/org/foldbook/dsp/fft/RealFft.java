@@ -82,13 +82,14 @@ public final class RealFft {
     /**
      * Zero-allocation transform: {@code work[0..n)} holds the samples on entry and is overwritten (its
      * contents afterwards are unspecified scratch); {@code re[k]}, {@code im[k]} receive bin k for
-     * {@code k = 0 .. n/2}. {@code re} and {@code im} must be distinct from {@code work}.
+     * {@code k = 0 .. n/2}. {@code re} and {@code im} must be distinct from {@code work}. Non-finite samples
+     * are detected from the result (no extra pass) and rejected without their index; callers that want the
+     * index check their input first, as {@link #forward(double[], int)} and the spectrum operators do.
      */
     public void forwardInPlace(double[] work, double[] re, double[] im) {
         requireLength("work", work, n);
         requireLength("re", re, bins());
         requireLength("im", im, bins());
-        requireFinite("work", work, 0);
         transform(work);
         if (n == 1) {
             re[0] = work[0];
@@ -132,7 +133,6 @@ public final class RealFft {
     public void accumulatePowerInPlace(double[] work, double[] sum) {
         requireLength("work", work, n);
         requireLength("sum", sum, bins());
-        requireFinite("work", work, 0);
         transform(work);
         if (n == 1) {
             sum[0] += work[0] * work[0];
@@ -154,9 +154,18 @@ public final class RealFft {
         }
     }
 
+    /**
+     * Transforms in place and rejects non-finite input at O(1) cost: the DC bin {@code work[0]} is the sum of
+     * all samples through butterflies of weight 1, so a NaN or infinity anywhere (or a sum that overflows)
+     * makes it non-finite.
+     */
     private void transform(double[] work) {
         if (fft != null) {
             fft.realForward(work);
+        }
+        if (!Double.isFinite(work[0])) {
+            throw new IllegalArgumentException("work[0.." + n + ") must hold finite samples of moderate size: "
+                    + "the transform's DC bin came out " + work[0]);
         }
     }
 

@@ -4,7 +4,8 @@ import org.foldbook.dsp.window.Window;
 
 /**
  * Detrend fused with windowing: {@code buf[j] = (x[start+j] - trend(j)) * w[j]}, in two passes over the
- * segment (one to fit the trend and detect non-finite samples, one to write), no temporary array.
+ * segment (one to fit the trend, whose sum also reveals non-finite samples, one to write), no temporary
+ * array.
  * Shared by {@link Welch} and {@link AmplitudeEstimator}; immutable.
  */
 final class WindowedSegment {
@@ -32,36 +33,22 @@ final class WindowedSegment {
     void prepare(double[] x, int start, double[] buf) {
         switch (detrend) {
             case NONE -> {
-                double probe = 0;
                 for (int j = 0; j < n; j++) {
-                    double v = x[start + j];
-                    probe += v * 0.0; // 0 for finite v, NaN otherwise
-                    buf[j] = v * w[j];
+                    buf[j] = x[start + j] * w[j];
                 }
-                requireFinite(probe, x, start);
+                requireFinite(sum(x, start), x, start);
             }
             case CONSTANT -> {
-                double sum = 0;
-                for (int j = 0; j < n; j++) {
-                    sum += x[start + j];
-                }
-                double mean = sum / n;
-                requireFinite(mean * 0.0, x, start);
+                double mean = sum(x, start) / n;
+                requireFinite(mean, x, start);
                 for (int j = 0; j < n; j++) {
                     buf[j] = (x[start + j] - mean) * w[j];
                 }
             }
             case LINEAR -> {
-                double sum = 0;
-                double sumTx = 0;
-                for (int j = 0; j < n; j++) {
-                    double v = x[start + j];
-                    sum += v;
-                    sumTx += (j - tCentre) * v;
-                }
-                double mean = sum / n;
-                double slope = sumT2 > 0 ? sumTx / sumT2 : 0.0;
-                requireFinite(mean * 0.0 + slope * 0.0, x, start);
+                double mean = sum(x, start) / n;
+                double slope = sumT2 > 0 ? centredMoment(x, start) / sumT2 : 0.0;
+                requireFinite(mean + slope, x, start);
                 for (int j = 0; j < n; j++) {
                     buf[j] = (x[start + j] - mean - slope * (j - tCentre)) * w[j];
                 }
@@ -70,8 +57,52 @@ final class WindowedSegment {
         }
     }
 
-    private void requireFinite(double probe, double[] x, int start) {
-        if (probe != 0) {
+    /**
+     * {@code sum x[start .. start+n)} with four partial sums: a single running sum is one long chain of
+     * dependent additions (the JIT may not reorder them), four chains keep the adder busy. A NaN or infinity
+     * anywhere in the segment makes the result non-finite.
+     */
+    private double sum(double[] x, int start) {
+        double s0 = 0;
+        double s1 = 0;
+        double s2 = 0;
+        double s3 = 0;
+        int j = 0;
+        for (; j + 3 < n; j += 4) {
+            s0 += x[start + j];
+            s1 += x[start + j + 1];
+            s2 += x[start + j + 2];
+            s3 += x[start + j + 3];
+        }
+        for (; j < n; j++) {
+            s0 += x[start + j];
+        }
+        return (s0 + s1) + (s2 + s3);
+    }
+
+    /** {@code sum (j - (n-1)/2) x[start+j]}, four partial sums. */
+    private double centredMoment(double[] x, int start) {
+        double s0 = 0;
+        double s1 = 0;
+        double s2 = 0;
+        double s3 = 0;
+        int j = 0;
+        for (; j + 3 < n; j += 4) {
+            double t = j - tCentre;
+            s0 += t * x[start + j];
+            s1 += (t + 1) * x[start + j + 1];
+            s2 += (t + 2) * x[start + j + 2];
+            s3 += (t + 3) * x[start + j + 3];
+        }
+        for (; j < n; j++) {
+            s0 += (j - tCentre) * x[start + j];
+        }
+        return (s0 + s1) + (s2 + s3);
+    }
+
+    /** {@code value} is a sum over the segment: non-finite iff a sample is, or the sum overflows. */
+    private void requireFinite(double value, double[] x, int start) {
+        if (!Double.isFinite(value)) {
             for (int j = start; j < start + n; j++) {
                 if (!Double.isFinite(x[j])) {
                     throw new IllegalArgumentException("x[" + j + "] must be finite, was " + x[j]);
