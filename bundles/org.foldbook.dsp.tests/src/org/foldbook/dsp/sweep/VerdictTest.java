@@ -91,7 +91,7 @@ class VerdictTest {
     @DisplayName("summaries: lowest true rate just above 2f (Nyquist), first fold just below; band summary")
     void summariesFollowNyquist() {
         double fs0 = 100_000;
-        double[] f = {1000, 4700, 13300, 27100};
+        double[] f = {1100, 4700, 13300, 27100}; // none at the Nyquist frequency of a ladder rate
         double[] x = Tones.of(1 << 16, fs0, f, new double[] {1, 0.5, 0.3, 0.2}, 1e-3, 3);
         RateLadder ladder = RateLadder.geometric(fs0, fs0, 2000, 24, 1000);
         SweepResult r = engine.run(x, ladder, Resampling.bare(), SpectrumSettings.DEFAULT, SweepProgress.NONE)

@@ -126,6 +126,7 @@ public interface Resampling {
     /** The modelled analog filter at the source rate, then the bare sampler. */
     final class ModelledFilter implements Resampling {
         private final AnalogFilter filter;
+        private final java.util.Map<Double, SecondOrderSections> realised = new java.util.concurrent.ConcurrentHashMap<>();
 
         ModelledFilter(AnalogFilter filter) {
             this.filter = Objects.requireNonNull(filter, "filter");
@@ -140,9 +141,13 @@ public interface Resampling {
             return "modelled";
         }
 
+        private SecondOrderSections realisedAt(double sourceRate) {
+            return realised.computeIfAbsent(sourceRate, filter::toDigital);
+        }
+
         @Override
         public double[] prepare(double[] source, double sourceRate) {
-            SecondOrderSections sos = filter.toDigital(sourceRate);
+            SecondOrderSections sos = realisedAt(sourceRate);
             double[] y = new double[source.length];
             sos.newFilter().filter(source, 0, y, 0, source.length);
             return y;
@@ -153,10 +158,14 @@ public interface Resampling {
             return BareSampler.of(step.ratio());
         }
 
-        /** |H(f)|² of the analog model (what the chain does, not its realisation). */
+        /**
+         * |H(f)|² of the realisation at the source rate, i.e. what this mode really applies; it follows the
+         * analog model's {@code filter().magnitude(f)} well below the source Nyquist frequency and falls
+         * faster near it (bilinear warping).
+         */
         @Override
         public double powerGain(double frequencyHz, RateStep step) {
-            double m = filter.magnitude(frequencyHz);
+            double m = realisedAt(step.sourceRate()).magnitude(frequencyHz);
             return m * m;
         }
     }

@@ -7,6 +7,7 @@ import org.foldbook.dsp.Check;
 import org.foldbook.dsp.peaks.PeakFinder;
 import org.foldbook.dsp.peaks.SpectralPeak;
 import org.foldbook.dsp.spectrum.Welch;
+import org.foldbook.dsp.window.WindowShape;
 
 /**
  * The recording's own PSD at its own rate and the reference peaks found in it: the starting point of
@@ -18,15 +19,17 @@ public final class SourceSpectrum {
     private final int segment;
     private final double[] psd;
     private final List<SourcePeak> peaks;
+    private final int[] peakBins;
     private final SpectrumSettings settings;
 
     private SourceSpectrum(double sourceRate, long samples, int segment, double[] psd, List<SourcePeak> peaks,
-            SpectrumSettings settings) {
+            int[] peakBins, SpectrumSettings settings) {
         this.sourceRate = sourceRate;
         this.samples = samples;
         this.segment = segment;
         this.psd = psd;
         this.peaks = List.copyOf(peaks);
+        this.peakBins = peakBins;
         this.settings = settings;
     }
 
@@ -52,13 +55,24 @@ public final class SourceSpectrum {
                     + psd.length);
         }
         double binWidth = sourceRate / segment;
-        List<SpectralPeak> found = finder(settings).findInPower(psd, psd.length, binWidth);
+        // same bins as the sweep's finder, but with the Hann kernel's sub-bin estimate (PeakFinder: below
+        // 1e-3 bin and 0.01 dB for a lone tone), so a source peak's frequency is known far better than its bin
+        PeakFinder refined = PeakFinder.builder().prominenceDb(settings.prominenceDb())
+                .windowKernel(WindowShape.HANN.periodic(segment)).build();
+        List<SpectralPeak> found = refined.findInPower(psd, psd.length, binWidth);
         List<SourcePeak> refs = new ArrayList<>(found.size());
+        int[] bins = new int[found.size()];
         double binDb = 10 * Math.log10(binWidth);
         for (SpectralPeak p : found) {
+            bins[refs.size()] = p.bin();
             refs.add(new SourcePeak(refs.size(), p.frequencyHz(), p.levelDb(), p.levelDb() + binDb));
         }
-        return new SourceSpectrum(sourceRate, samples, segment, psd.clone(), refs, settings);
+        return new SourceSpectrum(sourceRate, samples, segment, psd.clone(), refs, bins, settings);
+    }
+
+    /** Bin of the local maximum of source peak {@code id}. */
+    int peakBin(int id) {
+        return peakBins[id];
     }
 
     static PeakFinder finder(SpectrumSettings settings) {

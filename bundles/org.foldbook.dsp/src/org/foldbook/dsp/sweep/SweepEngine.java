@@ -178,7 +178,7 @@ public final class SweepEngine implements AutoCloseable {
         ws.welch.finish(ws.psd);
         double binWidth = fs / seg;
         List<SpectralPeak> peaks = finder.findInPower(ws.psd, welch.bins(), binWidth);
-        return classifier.classify(step, m, binWidth, peaks);
+        return classifier.classify(step, m, binWidth, peaks, mode);
     }
 
     /** Re-samplers that can compute any range of outputs from the whole input (no streaming state). */

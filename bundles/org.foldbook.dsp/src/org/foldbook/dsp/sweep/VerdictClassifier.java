@@ -12,18 +12,27 @@ import org.foldbook.dsp.peaks.SpectralPeak;
  *
  * <p>The apparent frequency of a source peak at rate fs is |f − k·fs| with k = round(f/fs) (folding;
  * Oppenheim &amp; Schafer ch. 4). A peak seen within the match radius of it is that source peak arriving:
- * SURVIVES when k = 0, FOLDS otherwise. The match radius is half a source bin (the source peak's own
- * frequency is known only to its bin) plus {@code matchBins} bins at the rate. Source peaks are served
+ * SURVIVES when k = 0, FOLDS otherwise. The match radius is {@value #SOURCE_TOLERANCE_BINS} of a source bin
+ * (the source peak's sub-bin frequency estimate, with room for leakage of neighbours and noise) plus
+ * {@code matchBins} bins at the rate (a seen peak is a bin centre). With a mode given, a seen peak more
+ * than {@value #LEVEL_EXCESS_DB} dB above the source peak's predicted level (its power times the mode's
+ * |H(f)|²) is not taken for it: that is other content (often a noise peak of a short average) at the spot
+ * where a strongly attenuated source peak would land. Source peaks are served
  * strongest first; one whose only candidate was already taken by a stronger source peak MERGES into it; one
  * with no candidate is SUPPRESSED. Peaks seen that no source peak claims are UNEXPLAINED.
  *
  * <p>Levels are compared as power in one bin (density + 10·log10(bin width)), which for a tone stays put
- * when the rate, and so the bin width, changes; the gain is then the attenuation the peak got (±1.4 dB of
- * Hann scalloping, Harris 1978 Table 1, when the tone sits differently on the two bin grids).
+ * when the rate, and so the bin width, changes; the gain is then the attenuation the peak got. The source
+ * level is scalloping-corrected and a seen level is a bin's, so a gain includes 0 to −1.42 dB of Hann
+ * scalloping (Harris 1978, Table 1).
  */
 public final class VerdictClassifier {
     /** Default match radius in bins at the rate, beyond the source-bin half width: 1.5 (common practice). */
     public static final double DEFAULT_MATCH_BINS = 1.5;
+    /** Uncertainty of a source peak's frequency, in source bins. */
+    public static final double SOURCE_TOLERANCE_BINS = 0.05;
+    /** How far above its predicted level (source power + 10·log10|H|²) a seen peak may be and still be the source peak. */
+    public static final double LEVEL_EXCESS_DB = 6.0;
 
     private final List<SourcePeak> sources;
     private final double sourceBinWidth;
@@ -70,11 +79,17 @@ public final class VerdictClassifier {
      * {@code outputSamples} values.
      */
     public RateResult classify(RateStep step, long outputSamples, double binWidth, List<SpectralPeak> seen) {
+        return classify(step, outputSamples, binWidth, seen, null);
+    }
+
+    /** As {@link #classify(RateStep, long, double, List)}, with the level check against {@code mode}'s |H|² (null: none). */
+    public RateResult classify(RateStep step, long outputSamples, double binWidth, List<SpectralPeak> seen,
+            Resampling mode) {
         if (!(binWidth > 0) || Double.isInfinite(binWidth)) {
             throw new IllegalArgumentException("binWidth must be a finite number > 0, was " + binWidth);
         }
         double fs = step.effectiveRate();
-        double radius = 0.5 * sourceBinWidth + matchBins * binWidth;
+        double radius = SOURCE_TOLERANCE_BINS * sourceBinWidth + matchBins * binWidth;
         double binDb = 10 * Math.log10(binWidth);
         int n = sources.size();
         double[] apparent = new double[n];
@@ -92,6 +107,11 @@ public final class VerdictClassifier {
         SourceFate[] fates = new SourceFate[n];
         for (int i : order) {
             SourcePeak src = sources.get(i);
+            double ceilingDb = Double.POSITIVE_INFINITY;
+            if (mode != null) {
+                ceilingDb = src.powerDb() + 10 * Math.log10(Math.max(mode.powerGain(src.frequency(), step), 1e-300))
+                        + LEVEL_EXCESS_DB;
+            }
             int best = -1;
             int bestTaken = -1;
             for (int j = 0; j < seen.size(); j++) {
@@ -100,6 +120,9 @@ public final class VerdictClassifier {
                     continue;
                 }
                 if (claimedBy[j] < 0) {
+                    if (seen.get(j).levelDb() + binDb > ceilingDb) {
+                        continue; // too strong to be this source peak on its own
+                    }
                     if (best < 0 || d < Math.abs(seen.get(best).frequencyHz() - apparent[i])) {
                         best = j;
                     }
