@@ -3,7 +3,7 @@
 
 Writes small CSV files into bundles/org.foldbook.dsp.tests/resources/reference/filters/:
   analog_cases.csv     one row per analog design (family, order, ripple, stopband, Bessel norm, cutoff)
-  analog_response.csv  H(j*2*pi*f) of each design from scipy.signal.freqs (real, imaginary part)
+  analog_response.csv  H(j*2*pi*f) of each design from scipy.signal.freqs_zpk (real, imaginary part)
   digital_cases.csv    one row per digital design at a sample rate (bilinear, pre-warped at the cutoff)
   digital_response.csv |H(e^jw)| from scipy.signal.sosfreqz
   digital_output.csv   scipy.signal.sosfilt of a synthetic test signal, from rest and from the
@@ -29,14 +29,15 @@ CUTOFF_HZ = 1000.0
 
 # family, order, ripple dB, stopband dB, bessel norm
 ANALOG = []
-for n in (1, 2, 3, 4, 5, 8, 12):
+for n in (1, 2, 3, 4, 5, 8, 12, 24):
     ANALOG.append(("butterworth", n, 0, 0, ""))
 for norm in ("delay", "phase", "mag"):
-    for n in (1, 2, 3, 4, 5, 6, 8, 10):
+    for n in (1, 2, 3, 4, 5, 6, 8, 10, 12, 16):
         ANALOG.append(("bessel", n, 0, 0, norm))
-for n, rp in ((1, 0.5), (2, 1.0), (3, 0.5), (4, 0.1), (5, 1.0), (6, 3.0), (9, 0.25)):
+for n, rp in ((1, 0.5), (2, 1.0), (3, 0.5), (4, 0.1), (5, 1.0), (6, 3.0), (9, 0.25), (16, 0.5)):
     ANALOG.append(("chebyshev1", n, rp, 0, ""))
-for n, rp, rs in ((1, 1.0, 40), (2, 0.5, 40), (3, 0.1, 60), (4, 1.0, 80), (5, 0.5, 60), (6, 0.1, 90), (8, 0.05, 100)):
+for n, rp, rs in ((1, 1.0, 40), (2, 0.5, 40), (3, 0.1, 60), (4, 1.0, 80), (5, 0.5, 60), (6, 0.1, 90), (8, 0.05, 100),
+                  (10, 0.5, 120), (12, 0.1, 140)):
     ANALOG.append(("elliptic", n, rp, rs, ""))
 
 # family, order, ripple, stopband, norm, cutoff Hz, sample rate Hz
@@ -89,8 +90,8 @@ def main():
         wr.writerow(["case", "f_hz", "re", "im"])
         for i, (fam, n, rp, rs, norm) in enumerate(ANALOG):
             wc.writerow([i, fam, n, rp, rs, norm, CUTOFF_HZ])
-            b, a = design(fam, n, rp, rs, norm, 2 * np.pi * CUTOFF_HZ, output="ba")
-            _, h = signal.freqs(b, a, worN=2 * np.pi * freqs)
+            z, p, k = design(fam, n, rp, rs, norm, 2 * np.pi * CUTOFF_HZ, output="zpk")
+            _, h = signal.freqs_zpk(z, p, k, worN=2 * np.pi * freqs)
             for f, hv in zip(freqs, h):
                 wr.writerow([i, g(f), g(hv.real), g(hv.imag)])
 

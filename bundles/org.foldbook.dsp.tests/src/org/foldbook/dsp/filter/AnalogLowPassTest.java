@@ -18,7 +18,7 @@ class AnalogLowPassTest {
     private static final double FC = 1000.0;
 
     @Test
-    @DisplayName("complex responses equal scipy.signal butter/bessel/cheby1/ellip(analog=True) + freqs")
+    @DisplayName("complex responses equal scipy.signal butter/bessel/cheby1/ellip(analog=True) + freqs_zpk")
     void matchesScipyFreqs() {
         ReferenceCsv cases = ReferenceCsv.load("analog_cases.csv");
         Map<Integer, List<String[]>> resp = ReferenceCsv.load("analog_response.csv").byCase();
