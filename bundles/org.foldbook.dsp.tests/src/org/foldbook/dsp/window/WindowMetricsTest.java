@@ -110,6 +110,16 @@ class WindowMetricsTest {
     }
 
     @Test
+    @DisplayName("long windows (coarser padding, refined by direct evaluation) give the same figures")
+    void longWindow() {
+        WindowMetrics small = WindowShape.HANN.periodic(N).metrics();
+        WindowMetrics big = WindowShape.HANN.periodic(1 << 20).metrics();
+        assertEquals(small.highestSidelobeDb(), big.highestSidelobeDb(), 0.01);
+        assertEquals(small.scallopLossDb(), big.scallopLossDb(), 1e-4);
+        assertEquals(small.sidelobeAtBins(), big.sidelobeAtBins(), 0.01);
+    }
+
+    @Test
     @DisplayName("bad input names parameter and value")
     void badInput() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
