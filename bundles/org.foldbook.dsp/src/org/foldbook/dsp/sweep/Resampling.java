@@ -5,6 +5,7 @@ import java.util.Objects;
 import org.foldbook.dsp.filter.AnalogFilter;
 import org.foldbook.dsp.filter.SecondOrderSections;
 import org.foldbook.dsp.resample.BareSampler;
+import org.foldbook.dsp.resample.IdealDecimator;
 import org.foldbook.dsp.resample.KaiserPolyphaseResampler;
 import org.foldbook.dsp.resample.Resampler;
 
@@ -47,6 +48,65 @@ public interface Resampling {
      */
     static Resampling modelledFilter(AnalogFilter filter) {
         return new ModelledFilter(filter);
+    }
+
+    /**
+     * Mode 3: what a correct digital down-sampler gives ({@link IdealDecimator}: multi-stage polyphase, pass
+     * band to 0.45·fs, at least 100 dB from fs/2 on).
+     */
+    static Resampling idealDecimator() {
+        return new Ideal(IdealDecimator.Spec.DEFAULT);
+    }
+
+    /** Mode 3 with another pass band / stop band / attenuation. */
+    static Resampling idealDecimator(IdealDecimator.Spec spec) {
+        return new Ideal(spec);
+    }
+
+    /** The ideal decimator; designs are kept per ratio, as the preview asks for the same rates again. */
+    final class Ideal implements Resampling {
+        private final IdealDecimator.Spec spec;
+        private final java.util.Map<Long, IdealDecimator> designs = new java.util.concurrent.ConcurrentHashMap<>();
+
+        Ideal(IdealDecimator.Spec spec) {
+            this.spec = Objects.requireNonNull(spec, "spec");
+        }
+
+        public IdealDecimator.Spec spec() {
+            return spec;
+        }
+
+        @Override
+        public String name() {
+            return "ideal";
+        }
+
+        private IdealDecimator design(RateStep step) {
+            return designs.computeIfAbsent((long) step.up() << 32 | step.down(),
+                    k -> IdealDecimator.of(step.ratio(), spec));
+        }
+
+        @Override
+        public Resampler forRate(RateStep step) {
+            return design(step);
+        }
+
+        /**
+         * |H|² from the stated response, not the design: 1 in the pass band (ripple ≤ 0.001 dB), the stated
+         * attenuation from the stop edge on (the design meets it or does better), log-linear between. Exact
+         * evaluation ({@link IdealDecimator#magnitude}) costs the prototype's length per frequency, too slow
+         * for a preview of thousands of bins.
+         */
+        @Override
+        public double powerGain(double frequencyHz, RateStep step) {
+            double fs = Math.min(step.effectiveRate(), step.sourceRate());
+            double u = Math.abs(frequencyHz) / fs;
+            if (u <= spec.passFraction()) {
+                return 1.0;
+            }
+            double t = Math.min(1.0, (u - spec.passFraction()) / (spec.stopFraction() - spec.passFraction()));
+            return Math.pow(10, -spec.attenuationDb() * t / 10);
+        }
     }
 
     /**

@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 
+import org.foldbook.dsp.fold.Folding;
 import org.foldbook.dsp.peaks.SpectralPeak;
 
 /**
@@ -58,12 +59,12 @@ public final class VerdictClassifier {
 
     /** Apparent frequency of {@code f} sampled at {@code fs}: |f − k·fs|, k = round(f/fs). */
     public static double apparentFrequency(double f, double fs) {
-        return Math.abs(f - fs * Math.rint(f / fs));
+        return Folding.apparentHz(f, fs);
     }
 
     /** Fold order k = round(f/fs); 0 means the frequency is below fs/2 and is kept as it is. */
     public static long foldOrder(double f, double fs) {
-        return (long) Math.rint(f / fs);
+        return (long) Math.floor(f / fs + 0.5);
     }
 
     public List<SourcePeak> sources() {
