@@ -20,6 +20,7 @@ import org.eclipse.emf.common.util.EList;
  *   <li>{@link org.foldbook.model.Digitizer#isDigitalFilter <em>Digital Filter</em>}</li>
  *   <li>{@link org.foldbook.model.Digitizer#getPassbandFraction <em>Passband Fraction</em>}</li>
  *   <li>{@link org.foldbook.model.Digitizer#getStopbandFraction <em>Stopband Fraction</em>}</li>
+ *   <li>{@link org.foldbook.model.Digitizer#getStopbandAttenuationDb <em>Stopband Attenuation Db</em>}</li>
  * </ul>
  *
  * @see org.foldbook.model.NotebookPackage#getDigitizer()
@@ -157,5 +158,30 @@ public interface Digitizer extends Device {
 	 * @generated
 	 */
 	void setStopbandFraction(Double value);
+
+	/**
+	 * Returns the value of the '<em><b>Stopband Attenuation Db</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Attenuation of the built-in filter from its stop-band edge on, in dB.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Stopband Attenuation Db</em>' attribute.
+	 * @see #setStopbandAttenuationDb(Double)
+	 * @see org.foldbook.model.NotebookPackage#getDigitizer_StopbandAttenuationDb()
+	 * @model
+	 * @generated
+	 */
+	Double getStopbandAttenuationDb();
+
+	/**
+	 * Sets the value of the '{@link org.foldbook.model.Digitizer#getStopbandAttenuationDb <em>Stopband Attenuation Db</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Stopband Attenuation Db</em>' attribute.
+	 * @see #getStopbandAttenuationDb()
+	 * @generated
+	 */
+	void setStopbandAttenuationDb(Double value);
 
 } // Digitizer

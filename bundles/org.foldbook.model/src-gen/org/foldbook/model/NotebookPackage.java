@@ -681,13 +681,22 @@ public interface NotebookPackage extends EPackage {
 	int DIGITIZER__STOPBAND_FRACTION = DEVICE_FEATURE_COUNT + 5;
 
 	/**
+	 * The feature id for the '<em><b>Stopband Attenuation Db</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int DIGITIZER__STOPBAND_ATTENUATION_DB = DEVICE_FEATURE_COUNT + 6;
+
+	/**
 	 * The number of structural features of the '<em>Digitizer</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int DIGITIZER_FEATURE_COUNT = DEVICE_FEATURE_COUNT + 6;
+	int DIGITIZER_FEATURE_COUNT = DEVICE_FEATURE_COUNT + 7;
 
 	/**
 	 * The number of operations of the '<em>Digitizer</em>' class.
@@ -1872,6 +1881,17 @@ public interface NotebookPackage extends EPackage {
 	EAttribute getDigitizer_StopbandFraction();
 
 	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.Digitizer#getStopbandAttenuationDb <em>Stopband Attenuation Db</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Stopband Attenuation Db</em>'.
+	 * @see org.foldbook.model.Digitizer#getStopbandAttenuationDb()
+	 * @see #getDigitizer()
+	 * @generated
+	 */
+	EAttribute getDigitizer_StopbandAttenuationDb();
+
+	/**
 	 * Returns the meta object for class '{@link org.foldbook.model.Camera <em>Camera</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -2875,6 +2895,14 @@ public interface NotebookPackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute DIGITIZER__STOPBAND_FRACTION = eINSTANCE.getDigitizer_StopbandFraction();
+
+		/**
+		 * The meta object literal for the '<em><b>Stopband Attenuation Db</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute DIGITIZER__STOPBAND_ATTENUATION_DB = eINSTANCE.getDigitizer_StopbandAttenuationDb();
 
 		/**
 		 * The meta object literal for the '{@link org.foldbook.model.impl.CameraImpl <em>Camera</em>}' class.

@@ -57,4 +57,29 @@ class ChainFiguresTest {
         device.setFamily(FilterFamily.UNKNOWN);
         assertTrue(ChainFigures.filterAttenuationAtNyquistDb(chain).isEmpty(), "no model for an unknown family");
     }
+
+    @Test
+    @DisplayName("dsp figures of the bench chain: Nyquist 10 kHz, Butterworth attenuation there, 24-bit requirement 6.02·N + 1.76 dB")
+    void dspFigures() {
+        SignalChain chain = vibrationChain(SyntheticNotebooks.bench());
+        var figures = ChainFigures.figures(chain).orElseThrow();
+        assertEquals(10000.0, figures.nyquistHz());
+        assertEquals(9000.0, figures.sensorMaxHz(), "resonance above the usable maximum counts");
+        // Butterworth |H|^2 = 1/(1+(f/fc)^2n), as above
+        assertEquals(10 * Math.log10(1 + Math.pow(10000.0 / 4000.0, 8)), figures.attenuationAtNyquistDb(), 1e-6);
+        // Kester, Analog Devices MT-001: ideal SNR of a full-scale sine = 6.02·N + 1.76 dB
+        assertEquals(6.02 * 24 + 1.76, figures.requiredAttenuationDb(), 0.02);
+        // camera chains have no digitizer figures
+        assertTrue(ChainFigures.figures(videoChain(SyntheticNotebooks.bench())).isEmpty());
+    }
+
+    @Test
+    @DisplayName("a camera chain's response is its exposure box-car: null at 1/T (|sin(πfT)/(πfT)|, common practice)")
+    void cameraExposureResponse() {
+        SignalChain video = videoChain(SyntheticNotebooks.bench());
+        var response = ChainFigures.chainResponse(video);
+        // exposure 4 ms: first null at 250 Hz; at 125 Hz |H| = sin(π/2)/(π/2) = 2/π
+        assertEquals(2 / Math.PI, response.magnitude(125.0), 1e-9);
+        assertEquals(0.0, response.magnitude(250.0), 1e-9);
+    }
 }

@@ -32,6 +32,7 @@ import org.foldbook.model.NotebookPackage;
  *   <li>{@link org.foldbook.model.impl.DigitizerImpl#isDigitalFilter <em>Digital Filter</em>}</li>
  *   <li>{@link org.foldbook.model.impl.DigitizerImpl#getPassbandFraction <em>Passband Fraction</em>}</li>
  *   <li>{@link org.foldbook.model.impl.DigitizerImpl#getStopbandFraction <em>Stopband Fraction</em>}</li>
+ *   <li>{@link org.foldbook.model.impl.DigitizerImpl#getStopbandAttenuationDb <em>Stopband Attenuation Db</em>}</li>
  * </ul>
  *
  * @generated
@@ -146,6 +147,26 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 	 * @ordered
 	 */
 	protected Double stopbandFraction = STOPBAND_FRACTION_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getStopbandAttenuationDb() <em>Stopband Attenuation Db</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getStopbandAttenuationDb()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final Double STOPBAND_ATTENUATION_DB_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getStopbandAttenuationDb() <em>Stopband Attenuation Db</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getStopbandAttenuationDb()
+	 * @generated
+	 * @ordered
+	 */
+	protected Double stopbandAttenuationDb = STOPBAND_ATTENUATION_DB_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -300,6 +321,29 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 	 * @generated
 	 */
 	@Override
+	public Double getStopbandAttenuationDb() {
+		return stopbandAttenuationDb;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setStopbandAttenuationDb(Double newStopbandAttenuationDb) {
+		Double oldStopbandAttenuationDb = stopbandAttenuationDb;
+		stopbandAttenuationDb = newStopbandAttenuationDb;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, NotebookPackage.DIGITIZER__STOPBAND_ATTENUATION_DB, oldStopbandAttenuationDb, stopbandAttenuationDb));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case NotebookPackage.DIGITIZER__RESOLUTION_BITS:
@@ -314,6 +358,8 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 				return getPassbandFraction();
 			case NotebookPackage.DIGITIZER__STOPBAND_FRACTION:
 				return getStopbandFraction();
+			case NotebookPackage.DIGITIZER__STOPBAND_ATTENUATION_DB:
+				return getStopbandAttenuationDb();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -346,6 +392,9 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 			case NotebookPackage.DIGITIZER__STOPBAND_FRACTION:
 				setStopbandFraction((Double)newValue);
 				return;
+			case NotebookPackage.DIGITIZER__STOPBAND_ATTENUATION_DB:
+				setStopbandAttenuationDb((Double)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -376,6 +425,9 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 			case NotebookPackage.DIGITIZER__STOPBAND_FRACTION:
 				setStopbandFraction(STOPBAND_FRACTION_EDEFAULT);
 				return;
+			case NotebookPackage.DIGITIZER__STOPBAND_ATTENUATION_DB:
+				setStopbandAttenuationDb(STOPBAND_ATTENUATION_DB_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -400,6 +452,8 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 				return PASSBAND_FRACTION_EDEFAULT == null ? passbandFraction != null : !PASSBAND_FRACTION_EDEFAULT.equals(passbandFraction);
 			case NotebookPackage.DIGITIZER__STOPBAND_FRACTION:
 				return STOPBAND_FRACTION_EDEFAULT == null ? stopbandFraction != null : !STOPBAND_FRACTION_EDEFAULT.equals(stopbandFraction);
+			case NotebookPackage.DIGITIZER__STOPBAND_ATTENUATION_DB:
+				return STOPBAND_ATTENUATION_DB_EDEFAULT == null ? stopbandAttenuationDb != null : !STOPBAND_ATTENUATION_DB_EDEFAULT.equals(stopbandAttenuationDb);
 		}
 		return super.eIsSet(featureID);
 	}
@@ -426,6 +480,8 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 		result.append(passbandFraction);
 		result.append(", stopbandFraction: ");
 		result.append(stopbandFraction);
+		result.append(", stopbandAttenuationDb: ");
+		result.append(stopbandAttenuationDb);
 		result.append(')');
 		return result.toString();
 	}

@@ -633,6 +633,16 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 	 * @generated
 	 */
 	@Override
+	public EAttribute getDigitizer_StopbandAttenuationDb() {
+		return (EAttribute)digitizerEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EClass getCamera() {
 		return cameraEClass;
 	}
@@ -1319,6 +1329,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		createEAttribute(digitizerEClass, DIGITIZER__DIGITAL_FILTER);
 		createEAttribute(digitizerEClass, DIGITIZER__PASSBAND_FRACTION);
 		createEAttribute(digitizerEClass, DIGITIZER__STOPBAND_FRACTION);
+		createEAttribute(digitizerEClass, DIGITIZER__STOPBAND_ATTENUATION_DB);
 
 		cameraEClass = createEClass(CAMERA);
 		createEAttribute(cameraEClass, CAMERA__FRAME_RATES_HZ);
@@ -1471,6 +1482,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		initEAttribute(getDigitizer_DigitalFilter(), ecorePackage.getEBoolean(), "digitalFilter", null, 0, 1, Digitizer.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getDigitizer_PassbandFraction(), ecorePackage.getEDoubleObject(), "passbandFraction", null, 0, 1, Digitizer.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getDigitizer_StopbandFraction(), ecorePackage.getEDoubleObject(), "stopbandFraction", null, 0, 1, Digitizer.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getDigitizer_StopbandAttenuationDb(), ecorePackage.getEDoubleObject(), "stopbandAttenuationDb", null, 0, 1, Digitizer.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(cameraEClass, Camera.class, "Camera", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getCamera_FrameRatesHz(), ecorePackage.getEDouble(), "frameRatesHz", null, 0, -1, Camera.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);

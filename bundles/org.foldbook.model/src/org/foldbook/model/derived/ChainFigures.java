@@ -2,9 +2,16 @@ package org.foldbook.model.derived;
 
 import java.util.Optional;
 
+import java.util.ArrayList;
+import java.util.List;
+
 import org.foldbook.dsp.filter.AnalogLowPass;
 import org.foldbook.dsp.filter.BesselNormalization;
+import org.foldbook.dsp.filter.Cascade;
+import org.foldbook.dsp.filter.DigitizerDigitalFilter;
+import org.foldbook.dsp.filter.ExposureBoxcar;
 import org.foldbook.dsp.filter.FrequencyResponse;
+import org.foldbook.dsp.fold.Folding;
 import org.foldbook.model.AntiAliasFilter;
 import org.foldbook.model.Amplifier;
 import org.foldbook.model.Camera;
@@ -130,7 +137,8 @@ public final class ChainFigures {
         if (!(upperHz > nyquist)) {
             return Optional.empty();
         }
-        double low = upperHz >= samplingRateHz ? 0.0 : samplingRateHz - upperHz;
+        // between fs/2 and fs the image runs from fs/2 down to |upper − fs|; from fs on it covers all of [0, fs/2]
+        double low = upperHz >= samplingRateHz ? 0.0 : Folding.apparentHz(upperHz, samplingRateHz);
         return Optional.of(new Band(low, nyquist));
     }
 
@@ -173,6 +181,63 @@ public final class ChainFigures {
             return Optional.empty();
         }
         return filterResponse(stage).map(response -> response.attenuationDb(nyquist));
+    }
+
+    /**
+     * The chain's magnitude response before sampling, as far as the notebook describes it: the analog
+     * filter, a digitizer's built-in digital filter (when its edges and stop-band attenuation are
+     * given) and a camera's exposure (box-car). Elements that are not described are left out, so a
+     * chain with none of them is flat (|H| = 1).
+     */
+    public static FrequencyResponse chainResponse(SignalChain chain) {
+        List<FrequencyResponse> elements = new ArrayList<>();
+        Stage filter = filterStage(chain);
+        if (filter != null) {
+            filterResponse(filter).ifPresent(elements::add);
+        }
+        Stage sampler = samplingStage(chain);
+        double rate = samplingRateHz(chain);
+        if (sampler != null && rate > 0) {
+            if (sampler.getDevice() instanceof Digitizer digitizer && digitizer.isDigitalFilter()
+                    && digitizer.getPassbandFraction() != null && digitizer.getStopbandFraction() != null
+                    && digitizer.getStopbandAttenuationDb() != null) {
+                elements.add(DigitizerDigitalFilter.of(rate, digitizer.getPassbandFraction(),
+                        digitizer.getStopbandFraction(), digitizer.getStopbandAttenuationDb()));
+            }
+            if (sampler.getDevice() instanceof Camera camera) {
+                Double exposure = sampler.getExposureS() != null ? sampler.getExposureS() : camera.getExposureS();
+                if (exposure != null && exposure > 0) {
+                    elements.add(new ExposureBoxcar(exposure));
+                }
+            }
+        }
+        if (elements.isEmpty()) {
+            return frequencyHz -> {
+                if (!Double.isFinite(frequencyHz)) {
+                    throw new IllegalArgumentException("frequencyHz must be finite, was " + frequencyHz);
+                }
+                return 1.0;
+            };
+        }
+        return elements.size() == 1 ? elements.get(0) : Cascade.of(elements);
+    }
+
+    /**
+     * Alias-free band, attenuation at Nyquist and protection margin of a digitizer chain, computed by
+     * {@code org.foldbook.dsp.digitizer} for a full-scale out-of-band tone that must stay below the
+     * ideal quantisation noise. Empty for camera chains, or when the rate, the resolution or the
+     * sensor's upper frequency is not known.
+     */
+    public static Optional<org.foldbook.dsp.digitizer.ChainFigures> figures(SignalChain chain) {
+        Stage sampler = samplingStage(chain);
+        double rate = samplingRateHz(chain);
+        double sensorMax = frontEndUpperHz(chain);
+        if (sampler == null || !(sampler.getDevice() instanceof Digitizer digitizer) || !(rate > 0)
+                || digitizer.getResolutionBits() <= 0 || !(sensorMax > 0)) {
+            return Optional.empty();
+        }
+        return Optional.of(org.foldbook.dsp.digitizer.ChainFigures.of(sensorMax, chainResponse(chain),
+                digitizer.getResolutionBits(), rate));
     }
 
     /** A closed frequency band in Hz. */
