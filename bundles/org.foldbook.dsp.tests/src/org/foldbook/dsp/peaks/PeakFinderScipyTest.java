@@ -4,7 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
 
+import org.foldbook.dsp.spectrum.PowerSpectrum;
 import org.foldbook.dsp.spectrum.ReferenceVectors;
+import org.foldbook.dsp.spectrum.Unit;
+import org.foldbook.dsp.spectrum.Welch;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
@@ -40,6 +43,24 @@ class PeakFinderScipyTest {
         double[] db = ReferenceVectors.column("peaks-psd-db.txt", 0);
         assertSame(db, "peaks-psd-db-prom10.txt", PeakFinder.builder().prominenceDb(10).build(), true);
         assertSame(db, "peaks-psd-db-prom3.txt", PeakFinder.builder().prominenceDb(3).build(), true);
+    }
+
+    @Test
+    @DisplayName("end to end: our Welch PSD of the same input, then our peaks = scipy's bins, levels within 1e-8 dB")
+    void endToEnd() {
+        double[] x = ReferenceVectors.column("welch-peer-like-input.txt", 0);
+        PowerSpectrum psd = Welch.builder(4096).build().psd(x, 100000.0, Unit.VOLT);
+        List<SpectralPeak> found = PeakFinder.builder().prominenceDb(10).build().find(psd);
+        double[] db = ReferenceVectors.column("peaks-psd-db.txt", 0);
+        List<double[]> ref = ReferenceVectors.rows("peaks-psd-db-prom10.txt");
+        assertEquals(ref.size(), found.size());
+        for (int i = 0; i < ref.size(); i++) {
+            int bin = (int) ref.get(i)[0];
+            assertEquals(bin, found.get(i).bin());
+            assertEquals(db[bin], found.get(i).levelDb(), 1e-8);
+            assertEquals(bin * 100000.0 / 4096, found.get(i).frequencyHz(), 1e-9);
+            assertEquals(ref.get(i)[1], found.get(i).prominenceDb(), 1e-8);
+        }
     }
 
     @Test
