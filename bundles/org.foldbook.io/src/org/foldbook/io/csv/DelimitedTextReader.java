@@ -215,6 +215,10 @@ public final class DelimitedTextReader implements RecordingReader {
             missing += format.parse(file, ln, line, values);
             if (timing != null) {
                 double t = values[timeColumn] * timeFactor;
+                if (!Double.isFinite(t)) {
+                    throw RecordingFormatException.atLine(file, ln, timeColumn + 1, "time stamp "
+                            + values[timeColumn] + " " + timeUnit + " is beyond the range of a double in seconds");
+                }
                 if (timing.count() > 0 && !(t > timing.last())) {
                     throw RecordingFormatException.atLine(file, ln, timeColumn + 1, "time stamp "
                             + values[timeColumn] + " does not increase (previous row at line " + previousLine + ")");
@@ -236,6 +240,10 @@ public final class DelimitedTextReader implements RecordingReader {
                         "one row only: no sample rate can be derived from the time column; give one");
             }
             rate = report.nominalRate();
+            if (!Double.isFinite(rate)) {
+                throw RecordingFormatException.atLine(file, firstDataLine, timeColumn + 1, "time stamps "
+                        + report.nominalInterval() + " s apart give no finite sample rate");
+            }
         }
         List<ChannelInfo> channels = new ArrayList<>();
         for (int c = 0; c < columns; c++) {

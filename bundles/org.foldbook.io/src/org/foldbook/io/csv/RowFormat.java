@@ -77,7 +77,12 @@ final class RowFormat {
             throw RecordingFormatException.atLine(file, line, column + 1, "cell '" + cell + "' is not a number"
                     + (decimal == 0 ? "" : " (decimal mark '" + decimal + "')"));
         }
-        return Double.parseDouble(s);
+        double v = Double.parseDouble(s);
+        if (!Double.isFinite(v)) {
+            throw RecordingFormatException.atLine(file, line, column + 1, "cell '" + cell
+                    + "' is beyond the range of a double");
+        }
+        return v;
     }
 
     /** [+-] digits [. digits] [e [+-] digits], at least one digit in the mantissa. */

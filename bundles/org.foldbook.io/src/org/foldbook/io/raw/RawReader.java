@@ -71,7 +71,8 @@ public final class RawReader {
             SampleCodec codec = new SampleCodec(layout.sampleType(), layout.byteOrder(), layout.channels(),
                     layout.scale(), layout.offset());
             if (layout.interleaved()) {
-                SequentialInput input = new SequentialInput(file, ch, options.bufferBytes(), options.sha256());
+                int buffer = Math.max(options.bufferBytes(), layout.frameBytes());
+                SequentialInput input = new SequentialInput(file, ch, buffer, options.sha256());
                 return new FrameStreamReader(info, input, codec, layout.headerBytes());
             }
             // planes decode one channel at a time; the per-channel scale is applied afterwards

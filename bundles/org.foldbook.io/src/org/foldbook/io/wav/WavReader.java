@@ -82,7 +82,9 @@ public final class WavReader {
             RecordingInfo info = new RecordingInfo(file, layout.rf64() ? RecordingFormat.RF64 : RecordingFormat.WAV,
                     channels, layout.sampleRate(), layout.frameCount(), t, scaling, Optional.empty(), 0);
             SampleCodec codec = SampleCodec.uniform(t, ByteOrder.LITTLE_ENDIAN, layout.channels(), scale, offset);
-            SequentialInput input = new SequentialInput(file, ch, options.bufferBytes(), options.sha256());
+            // the buffer must hold at least one frame (65535 channels of 8 bytes fit in 512 KiB)
+            int buffer = Math.max(options.bufferBytes(), layout.blockAlign());
+            SequentialInput input = new SequentialInput(file, ch, buffer, options.sha256());
             return new FrameStreamReader(info, input, codec, layout.dataOffset());
         } catch (IOException | RuntimeException e) {
             ch.close();
@@ -156,10 +158,14 @@ public final class WavReader {
                 }
             }
             long body = pos + 8;
+            if (chunkSize < 0) {
+                throw RecordingFormatException.atByte(file, pos, "chunk '" + printable(chunk)
+                        + "' has a negative 64-bit size " + chunkSize + " in the ds64 table");
+            }
             if (chunkSize > riffEnd - body) {
                 String what = chunk.equals("data") ? "truncated data chunk" : "declared size beyond the file";
                 throw RecordingFormatException.atByte(file, pos, "chunk '" + printable(chunk) + "' declares "
-                        + chunkSize + " bytes from offset " + body + " but the file ends at " + riffEnd + " (" + what + ")");
+                        + chunkSize + " bytes from offset " + body + " but the RIFF form ends at " + riffEnd + " (" + what + ")");
             }
             if (chunk.equals("fmt ")) {
                 if (chunkSize < 16 || chunkSize > 4096) {
