@@ -35,6 +35,9 @@ class AnalogLowPassTest {
                 assertTrue(err < 1e-8, () -> f + " at " + hz + " Hz: " + h + " vs scipy " + ref + " (rel err " + err + ")");
                 // magnitude by the log-sum path agrees too
                 assertEquals(-20 * Math.log10(ref.abs()), f.attenuationDb(hz), 1e-7, f + " attenuation at " + hz);
+                // the continuous phase equals scipy's angle up to whole turns
+                double turns = (f.phaseRad(hz) - ref.arg()) / (2 * Math.PI);
+                assertEquals(Math.rint(turns), turns, 1e-8, f + " phase at " + hz);
                 checked++;
             }
         }
@@ -131,6 +134,19 @@ class AnalogLowPassTest {
             assertTrue(f.attenuationDb(x) >= rs - 1e-6, "at " + x);
         }
         assertEquals(2 * (n / 2), f.zeros().length);
+    }
+
+    @Test
+    @DisplayName("group delay in closed form equals −dφ/dω by central differences of the phase")
+    void groupDelayIsPhaseSlope() {
+        for (AnalogFilter f : new AnalogFilter[] {AnalogLowPass.butterworth(5, FC), AnalogLowPass.chebyshev1(4, 1, FC),
+                AnalogLowPass.bessel(6, FC, BesselNormalization.DELAY), AnalogLowPass.elliptic(4, 0.5, 50, FC)}) {
+            for (double hz : new double[] {50, 400, 900, 1100, 3000}) {
+                double h = 1e-3;
+                double slope = -(f.phaseRad(hz + h) - f.phaseRad(hz - h)) / (2 * Math.PI * 2 * h);
+                assertEquals(slope, f.groupDelaySeconds(hz), 1e-7 * Math.abs(slope) + 1e-12, f + " at " + hz);
+            }
+        }
     }
 
     @Test
