@@ -1,0 +1,119 @@
+package org.foldbook.app;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.eclipse.e4.core.di.annotations.Optional;
+import org.eclipse.e4.ui.di.UIEventTopic;
+import org.eclipse.e4.ui.model.application.MApplication;
+import org.eclipse.e4.ui.model.application.ui.basic.MPart;
+import org.eclipse.e4.ui.model.application.ui.basic.MTrimmedWindow;
+import org.eclipse.e4.ui.workbench.IWorkbench;
+import org.eclipse.e4.ui.workbench.UIEvents;
+import org.eclipse.e4.ui.workbench.modeling.EModelService;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.graphics.GC;
+import org.eclipse.swt.graphics.Image;
+import org.eclipse.swt.graphics.ImageData;
+import org.eclipse.swt.graphics.ImageLoader;
+import org.eclipse.swt.graphics.Rectangle;
+import org.eclipse.swt.widgets.Control;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Shell;
+
+import jakarta.inject.Inject;
+
+/**
+ * Installation self-check ({@code ./foldbook --self-check DIR}): once the workbench has started, it
+ * records which windows and parts were really rendered, saves a screenshot of the main window, writes
+ * both to DIR and closes the workbench. It lets a person (or the build's smoke test) see that the
+ * product starts on this machine's display without clicking anything. Inactive unless the system
+ * property {@value #PROPERTY} names a folder.
+ */
+public class SelfCheckAddon {
+    /** System property naming the output folder; the addon does nothing without it. */
+    public static final String PROPERTY = "foldbook.selfCheck";
+    /** Delay before the check, so that the first layout and paint have happened. */
+    private static final int SETTLE_MILLIS = 2500;
+
+    @Inject
+    private MApplication application;
+    @Inject
+    private EModelService modelService;
+    @Inject
+    @Optional
+    public void startupComplete(@UIEventTopic(UIEvents.UILifeCycle.APP_STARTUP_COMPLETE) Object event) {
+        String folder = System.getProperty(PROPERTY);
+        if (folder == null || folder.isBlank()) {
+            return;
+        }
+        // The workbench service exists only once start-up is complete, so it is looked up here.
+        IWorkbench workbench = application.getContext().get(IWorkbench.class);
+        Display display = Display.getCurrent();
+        display.timerExec(SETTLE_MILLIS, () -> {
+            try {
+                runCheck(display, Path.of(folder));
+            } finally {
+                workbench.close();
+            }
+        });
+    }
+
+    private void runCheck(Display display, Path folder) {
+        List<String> report = new ArrayList<>();
+        Shell mainShell = null;
+        for (MTrimmedWindow window : modelService.findElements(application, null, MTrimmedWindow.class)) {
+            boolean shown = window.getWidget() instanceof Shell shell && shell.isVisible();
+            report.add("window." + window.getElementId() + "=" + (shown ? "visible" : "not-visible"));
+            if (shown && mainShell == null) {
+                mainShell = (Shell) window.getWidget();
+                report.add("window.title=" + mainShell.getText());
+                Rectangle b = mainShell.getBounds();
+                report.add("window.size=" + b.width + "x" + b.height);
+            }
+        }
+        for (MPart part : modelService.findElements(application, null, MPart.class)) {
+            boolean shown = part.getWidget() instanceof Control c && !c.isDisposed() && c.isVisible();
+            report.add("part." + part.getElementId() + "=" + (shown ? "visible" : "not-visible"));
+        }
+        try {
+            Files.createDirectories(folder);
+            if (mainShell != null) {
+                report.add("screenshot=" + saveScreenshot(display, mainShell, folder.resolve("workbench.png")));
+            }
+            Files.write(folder.resolve("self-check.properties"), report, StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException("self-check could not write to " + folder, e);
+        }
+    }
+
+    /** Copies the main window's pixels from the screen into a PNG. */
+    private static Path saveScreenshot(Display display, Shell shell, Path file) {
+        shell.forceActive();
+        while (display.readAndDispatch()) {
+            // let pending paints finish before reading pixels back
+        }
+        Rectangle outer = shell.getBounds();
+        Image image = new Image(display, outer.width, outer.height);
+        GC gc = new GC(display);
+        try {
+            gc.copyArea(image, outer.x, outer.y);
+        } finally {
+            gc.dispose();
+        }
+        try {
+            ImageData data = image.getImageData();
+            ImageLoader loader = new ImageLoader();
+            loader.data = new ImageData[] {data};
+            loader.save(file.toString(), SWT.IMAGE_PNG);
+        } finally {
+            image.dispose();
+        }
+        return file.getFileName();
+    }
+}
