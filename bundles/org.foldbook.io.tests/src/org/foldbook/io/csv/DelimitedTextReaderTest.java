@@ -184,6 +184,24 @@ class DelimitedTextReaderTest {
     }
 
     @Test
+    void crlfBomCommentsAndQuotedCells() throws IOException {
+        // synthetic: a spreadsheet-style export with BOM, CRLF, a comment line, quoted header cells, a lone CR
+        Path p = dir.resolve("export.csv");
+        Files.write(p, "\uFEFF# exported\r\n\"time [ms]\";\"p [kPa]\"\r\n0;1,25\r\n\r\n2;-3,5e-1\r4;\"7\"\r\n"
+                .getBytes(StandardCharsets.UTF_8));
+        try (DelimitedTextReader r = DelimitedTextReader.open(p)) {
+            assertEquals(List.of(new ChannelInfo("p", "kPa")), r.info().channels());
+            assertEquals(3, r.info().frameCount());
+            assertEquals(500.0, r.info().sampleRate(), 1e-9, "2 ms between stamps");
+            double[][] v = new double[1][3];
+            double[] t = new double[3];
+            assertEquals(3, r.read(v, t, 0, 3));
+            assertArrayEquals(new double[] {1.25, -0.35, 7}, v[0], 0.0);
+            assertArrayEquals(new double[] {0, 0.002, 0.004}, t, 0.0);
+        }
+    }
+
+    @Test
     void invalidUtf8IsReportedWithItsLine() throws IOException {
         Path p = dir.resolve("latin1.csv");
         Files.write(p, "t,a\n0,1\n1,2 \u00b5\n".getBytes(StandardCharsets.ISO_8859_1));

@@ -71,9 +71,9 @@ class WavReaderSoxTest {
         }
     }
 
-    /** Layouts the JDK's WAV readers accept (PCM 8-32 bit, extensible and IEEE float 32). */
+    /** Every layout: the JDK 25 WAV readers accept them all (PCM 8-32 bit, extensible, IEEE float 32/64). */
     @ParameterizedTest(name = "{0}: javax.sound.sampled")
-    @CsvSource({"u8-mono", "s16-stereo", "s16-3ch", "s24-mono", "s24-6ch", "s32-stereo", "f32-stereo", "f32-4ch"})
+    @CsvSource({"u8-mono", "s16-stereo", "s16-3ch", "s24-mono", "s24-stereo", "s24-6ch", "s32-stereo", "f32-stereo", "f32-4ch", "f64-mono", "f64-stereo"})
     void matchesJdkDecoder(String name) throws IOException, UnsupportedAudioFileException {
         Path wav = TestFiles.copy("wav/sox/" + name + ".wav", dir);
         try (AudioInputStream jdk = AudioSystem.getAudioInputStream(wav.toFile());
@@ -91,7 +91,7 @@ class WavReaderSoxTest {
             for (int i = 0; i < ours.length; i++) {
                 double expected;
                 if (f.getEncoding() == AudioFormat.Encoding.PCM_FLOAT) {
-                    expected = b.getFloat();
+                    expected = bits == 64 ? b.getDouble() : b.getFloat();
                 } else if (f.getEncoding() == AudioFormat.Encoding.PCM_UNSIGNED) {
                     expected = ((b.get() & 0xFF) - 128) / 128.0;
                 } else {
