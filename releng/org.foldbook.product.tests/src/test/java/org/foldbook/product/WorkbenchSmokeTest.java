@@ -1,0 +1,113 @@
+package org.foldbook.product;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.DirectoryStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Properties;
+import java.util.concurrent.TimeUnit;
+
+import javax.imageio.ImageIO;
+
+import org.junit.jupiter.api.Test;
+
+/**
+ * Starts the real Foldbook product (Equinox launcher, E4 application, our application model) with its
+ * self-check switched on, and checks the report it leaves: the main window was shown, the fold
+ * explorer part was rendered, and the screenshot holds a real picture. The screenshot stays in
+ * target/smoke/workbench.png for a person to look at.
+ */
+class WorkbenchSmokeTest {
+    private static final long START_TIMEOUT_SECONDS = 180;
+
+    @Test
+    void productStartsAndRendersTheMainWindowAndPart() throws Exception {
+        Path product = Path.of(System.getProperty("foldbook.product.dir"));
+        Path out = Path.of(System.getProperty("foldbook.smoke.dir"));
+        Files.createDirectories(out);
+        Files.deleteIfExists(out.resolve("self-check.properties"));
+        Files.deleteIfExists(out.resolve("workbench.png"));
+
+        List<String> command = new ArrayList<>();
+        command.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
+        command.add("-Xmx1g");
+        command.add("-Dfoldbook.selfCheck=" + out.toAbsolutePath());
+        command.add("-jar");
+        command.add(launcherJar(product).toString());
+        command.add("-consoleLog");
+        command.add("-data");
+        command.add(out.resolve("workspace").toAbsolutePath().toString());
+        command.add("-configuration");
+        command.add(out.resolve("configuration").toAbsolutePath().toString());
+        // the private configuration area needs the product's config.ini to know what to start
+        Files.createDirectories(out.resolve("configuration"));
+        Files.copy(product.resolve("configuration/config.ini"), out.resolve("configuration/config.ini"),
+                java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        copyTree(product.resolve("configuration/org.eclipse.equinox.simpleconfigurator"),
+                out.resolve("configuration/org.eclipse.equinox.simpleconfigurator"));
+
+        Process process = new ProcessBuilder(command).directory(product.toFile())
+                .redirectErrorStream(true).redirectOutput(out.resolve("console.log").toFile()).start();
+        boolean exited = process.waitFor(START_TIMEOUT_SECONDS, TimeUnit.SECONDS);
+        if (!exited) {
+            process.destroyForcibly();
+        }
+        String console = Files.readString(out.resolve("console.log"));
+        assertTrue(exited, "the workbench did not close itself within " + START_TIMEOUT_SECONDS + " s; console:\n" + console);
+
+        Path reportFile = out.resolve("self-check.properties");
+        assertTrue(Files.isRegularFile(reportFile), "no self-check report was written; console:\n" + console);
+        Properties report = new Properties();
+        try (InputStream in = Files.newInputStream(reportFile)) {
+            report.load(in);
+        }
+        assertEquals("visible", report.getProperty("window.org.foldbook.app.window.main"), report.toString());
+        assertEquals("Foldbook", report.getProperty("window.title"), report.toString());
+        assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.foldExplorer"), report.toString());
+        assertTrue(!console.contains("!ENTRY") || !console.contains("Exception"),
+                "the workbench logged an exception:\n" + console);
+
+        BufferedImage shot = ImageIO.read(out.resolve("workbench.png").toFile());
+        assertTrue(shot.getWidth() >= 800 && shot.getHeight() >= 500, "screenshot too small: " + shot.getWidth() + "x" + shot.getHeight());
+        assertTrue(distinctColours(shot) > 20, "the screenshot is (nearly) a single colour: nothing was drawn");
+    }
+
+    private static Path launcherJar(Path product) throws IOException {
+        try (DirectoryStream<Path> jars = Files.newDirectoryStream(product.resolve("plugins"), "org.eclipse.equinox.launcher_*.jar")) {
+            for (Path jar : jars) {
+                return jar;
+            }
+        }
+        throw new IllegalStateException("no Equinox launcher jar in " + product.resolve("plugins") + ": is the product materialised?");
+    }
+
+    private static void copyTree(Path from, Path to) throws IOException {
+        try (var paths = Files.walk(from)) {
+            for (Path p : (Iterable<Path>) paths::iterator) {
+                Path target = to.resolve(from.relativize(p).toString());
+                if (Files.isDirectory(p)) {
+                    Files.createDirectories(target);
+                } else {
+                    Files.copy(p, target, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+                }
+            }
+        }
+    }
+
+    private static int distinctColours(BufferedImage image) {
+        java.util.Set<Integer> colours = new java.util.HashSet<>();
+        for (int y = 0; y < image.getHeight(); y += 7) {
+            for (int x = 0; x < image.getWidth(); x += 7) {
+                colours.add(image.getRGB(x, y));
+            }
+        }
+        return colours.size();
+    }
+}
