@@ -161,6 +161,32 @@ class BareSamplerTest {
     }
 
     @Test
+    @DisplayName("the row-by-row loop for long ranges gives bit for bit the output-by-output result")
+    void blockedLoopEqualsSingleOutputs() {
+        Random rnd = new Random(17);
+        double[] x = new double[20_000];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = rnd.nextGaussian();   // synthetic input
+        }
+        for (RateRatio q : new RateRatio[] {RateRatio.of(4, 5), RateRatio.of(13, 50), RateRatio.of(99, 100),
+                RateRatio.of(521, 542), RateRatio.of(5, 3), RateRatio.of(7, 1000)}) {
+            BareSampler s = BareSampler.of(q);
+            double[] whole = s.apply(x);
+            double[] one = new double[1];
+            for (int m = 0; m < whole.length; m++) {
+                s.evaluate(x, m, one, 0, 1);
+                assertEquals(whole[m], one[0], 0.0, q + " output " + m);
+            }
+            // a range that starts mid-row and ends mid-row
+            int first = 3 + (int) q.up() / 2;
+            int count = whole.length - 2 * first;
+            double[] part = new double[count];
+            s.evaluate(x, first, part, 0, count);
+            assertArrayEquals(Arrays.copyOfRange(whole, first, first + count), part, 0.0, q.toString());
+        }
+    }
+
+    @Test
     @DisplayName("short inputs (fewer samples than taps) still give ceil(N·up/down) outputs, as the formula")
     void shortInput() {
         double[] x = {1.0, -2.0, 0.5};

@@ -47,10 +47,16 @@ public final class BareSampler implements Resampler {
                         + " taps, more than " + PolyphaseKernel.MAX_TABLE + "; choose a smaller denominator bound");
             }
             double[] table = new double[up * taps];
-            for (int p = 0; p < up; p++) {
+            // h is even, so row up−p is row p reversed: compute rows 0 .. up/2, mirror the rest
+            for (int p = 0; p <= up / 2; p++) {
                 double frac = (double) p / up;
                 for (int i = 0; i < taps; i++) {
                     table[p * taps + i] = kernelShape.value((-halfWidth + 1 + i) - frac);
+                }
+                if (p > 0 && up - p != p) {
+                    for (int i = 0; i < taps; i++) {
+                        table[(up - p) * taps + i] = table[p * taps + taps - 1 - i];
+                    }
                 }
             }
             this.kernel = new PolyphaseKernel(up, intDown(ratio), taps, -halfWidth + 1, table);

@@ -62,11 +62,15 @@ public final class KaiserPolyphaseResampler implements Resampler {
         double i0b = Bessel.i0(beta);
         double[] h = new double[n];
         double sum = 0;
-        for (int i = 0; i < n; i++) {
+        // symmetric: compute the first half and the centre, mirror the rest
+        for (int i = 0; i <= n / 2; i++) {
             double m = i - alpha;
             double u = alpha == 0 ? 0 : m / alpha;
             double w = Bessel.i0(beta * Math.sqrt(Math.max(0.0, 1.0 - u * u))) / i0b;
             h[i] = cutoff * KaiserSinc.sinc(cutoff * m) * w;
+            h[n - 1 - i] = h[i];
+        }
+        for (int i = 0; i < n; i++) {
             sum += h[i];
         }
         for (int i = 0; i < n; i++) {

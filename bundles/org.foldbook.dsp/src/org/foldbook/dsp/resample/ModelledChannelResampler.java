@@ -130,6 +130,10 @@ public final class ModelledChannelResampler implements Resampler {
     private static PolyphaseKernel combinedKernel(RateRatio ratio, double[] c) {
         int w = BareSampler.DEFAULT_HALF_WIDTH;
         KaiserSinc h = new KaiserSinc(w, BareSampler.DEFAULT_BETA);
+        PolyphaseKernel bare = BareSampler.of(ratio).kernel();          // null for up = 1
+        if (c.length == 1 && bare != null) {
+            return bare;                                                 // nothing to fold in
+        }
         int up = BareSampler.phaseCount(ratio);
         int down = BareSampler.intDown(ratio);
         int centre = c.length / 2;
@@ -144,7 +148,8 @@ public final class ModelledChannelResampler implements Resampler {
         for (int p = 0; p < up; p++) {
             double f = (double) p / up;
             for (int k = 0; k < 2 * w; k++) {
-                hk[k] = h.value((-w + 1 + k) - f);          // bare kernel tap for v[b + k - w + 1]
+                // bare kernel tap for v[b + k - w + 1] (the sampler's own table, so an empty model is mode 1)
+                hk[k] = bare != null ? bare.coefficient(p, k) : h.value((-w + 1 + k) - f);
             }
             int row = p * taps;
             // v[b + kk] = Σ_j c[j]·x[b + kk − (j − C)]; kk = k − w + 1, x index offset i' = kk − j + C

@@ -133,32 +133,54 @@ final class PolyphaseKernel {
             throw new IllegalStateException("taps [" + first + ", " + last + ") outside buffer of " + buf.length);
         }
         if (taps == 32) {
-            run32(buf, (int) first, p, out, outOff, count);
+            run32(buf, (int) first, p, m0, out, outOff, count);
         } else {
             runAny(buf, (int) first, p, out, outOff, count);
         }
     }
 
-    // The 32-tap case (the bare sampler) gets its own loop: a fixed trip count the JIT unrolls fully.
-    private void run32(double[] x, int pos, int p, double[] out, int outOff, int count) {
+    // The 32-tap case (the bare sampler) gets its own loops. Every output is summed in one fixed order
+    // (even taps and odd taps in two running sums, then added), whichever loop computes it, so results
+    // do not depend on how a caller splits the output range into blocks.
+    private void run32(double[] x, int pos, int p, long m0, double[] out, int outOff, int count) {
+        int done = 0;
+        if (up >= 4 && count >= 8 * up) {
+            // outputs one by one up to the start of a row (m ≡ 0 mod up), then whole rows phase by phase
+            int head = (int) ((up - m0 % up) % up);
+            int rows = (count - head) / up;
+            runLinear32(x, pos, p, out, outOff, head);
+            int[] st = advanceState(pos, p, head);
+            runRows32(x, st[0], out, outOff + head, rows);
+            done = head + rows * up;
+        }
+        if (done < count) {
+            int[] st = advanceState(pos, p, done);
+            runLinear32(x, st[0], st[1], out, outOff + done, count - done);
+        }
+    }
+
+    /** (pos, phase) after {@code steps} outputs from (pos, p). */
+    private int[] advanceState(int pos, int p, int steps) {
+        long t = (long) p + (long) steps * stepRest;
+        return new int[] {(int) (pos + (long) steps * stepWhole + t / up), (int) (t % up)};
+    }
+
+    private void runLinear32(double[] x, int pos, int p, double[] out, int outOff, int count) {
         final double[] h = table;
         final int u = up;
         final int sw = stepWhole;
         final int sr = stepRest;
         for (int o = outOff, end = outOff + count; o < end; o++) {
             int r = p << 5;
-            double s0 = 0, s1 = 0, s2 = 0, s3 = 0, s4 = 0, s5 = 0, s6 = 0, s7 = 0;
-            for (int i = 0; i < 32; i += 8) {
-                s0 += x[pos + i] * h[r + i];
-                s1 += x[pos + i + 1] * h[r + i + 1];
-                s2 += x[pos + i + 2] * h[r + i + 2];
-                s3 += x[pos + i + 3] * h[r + i + 3];
-                s4 += x[pos + i + 4] * h[r + i + 4];
-                s5 += x[pos + i + 5] * h[r + i + 5];
-                s6 += x[pos + i + 6] * h[r + i + 6];
-                s7 += x[pos + i + 7] * h[r + i + 7];
+            double e0 = 0, o0 = 0, e1 = 0, o1 = 0;
+            // two interleaved chains per sum keep the adds overlapped; they are combined in a fixed order
+            for (int i = 0; i < 32; i += 4) {
+                e0 += x[pos + i] * h[r + i];
+                o0 += x[pos + i + 1] * h[r + i + 1];
+                e1 += x[pos + i + 2] * h[r + i + 2];
+                o1 += x[pos + i + 3] * h[r + i + 3];
             }
-            out[o] = ((s0 + s1) + (s2 + s3)) + ((s4 + s5) + (s6 + s7));
+            out[o] = (e0 + e1) + (o0 + o1);
             pos += sw;
             p += sr;
             if (p >= u) {
@@ -168,6 +190,78 @@ final class PolyphaseKernel {
         }
     }
 
+    /**
+     * {@code rows} whole rows of up outputs, starting at an output of phase index 0 (m ≡ 0 mod up) whose
+     * first tap is x[pos]. Outputs m = q·up + j share phase p_j and step down samples from row to row,
+     * so four rows of one phase are summed together: each coefficient is loaded once for four outputs.
+     * Rows are taken in groups small enough for their input to stay in cache across all phases.
+     */
+    private void runRows32(double[] x, int pos, double[] out, int outOff, int rows) {
+        final double[] h = table;
+        final int u = up;
+        final int d = down;
+        final int group = Math.max(4, Math.min(64, (1 << 15) / Math.max(d, 1)) & ~3);
+        for (int q0 = 0; q0 < rows; q0 += group) {
+            int qn = Math.min(group, rows - q0);
+            int q4 = qn & ~3;
+            for (int j = 0; j < u; j++) {
+                long jd = (long) j * d;
+                int fj = (int) (jd / u);
+                int r = (int) (jd - (long) fj * u) << 5;
+                int q = 0;
+                for (; q < q4; q += 4) {
+                    int p0 = pos + (q0 + q) * d + fj;
+                    int p1 = p0 + d;
+                    int p2 = p1 + d;
+                    int p3 = p2 + d;
+                    double ae0 = 0, ao0 = 0, ae1 = 0, ao1 = 0;
+                    double be0 = 0, bo0 = 0, be1 = 0, bo1 = 0;
+                    double ce0 = 0, co0 = 0, ce1 = 0, co1 = 0;
+                    double de0 = 0, do0 = 0, de1 = 0, do1 = 0;
+                    for (int i = 0; i < 32; i += 4) {
+                        double h0 = h[r + i];
+                        double h1 = h[r + i + 1];
+                        double h2 = h[r + i + 2];
+                        double h3 = h[r + i + 3];
+                        ae0 += x[p0 + i] * h0;
+                        ao0 += x[p0 + i + 1] * h1;
+                        ae1 += x[p0 + i + 2] * h2;
+                        ao1 += x[p0 + i + 3] * h3;
+                        be0 += x[p1 + i] * h0;
+                        bo0 += x[p1 + i + 1] * h1;
+                        be1 += x[p1 + i + 2] * h2;
+                        bo1 += x[p1 + i + 3] * h3;
+                        ce0 += x[p2 + i] * h0;
+                        co0 += x[p2 + i + 1] * h1;
+                        ce1 += x[p2 + i + 2] * h2;
+                        co1 += x[p2 + i + 3] * h3;
+                        de0 += x[p3 + i] * h0;
+                        do0 += x[p3 + i + 1] * h1;
+                        de1 += x[p3 + i + 2] * h2;
+                        do1 += x[p3 + i + 3] * h3;
+                    }
+                    int o = outOff + (q0 + q) * u + j;
+                    out[o] = (ae0 + ae1) + (ao0 + ao1);
+                    out[o + u] = (be0 + be1) + (bo0 + bo1);
+                    out[o + 2 * u] = (ce0 + ce1) + (co0 + co1);
+                    out[o + 3 * u] = (de0 + de1) + (do0 + do1);
+                }
+                for (; q < qn; q++) {
+                    int p0 = pos + (q0 + q) * d + fj;
+                    double e0 = 0, o0 = 0, e1 = 0, o1 = 0;
+                    for (int i = 0; i < 32; i += 4) {
+                        e0 += x[p0 + i] * h[r + i];
+                        o0 += x[p0 + i + 1] * h[r + i + 1];
+                        e1 += x[p0 + i + 2] * h[r + i + 2];
+                        o1 += x[p0 + i + 3] * h[r + i + 3];
+                    }
+                    out[outOff + (q0 + q) * u + j] = (e0 + e1) + (o0 + o1);
+                }
+            }
+        }
+    }
+
+    // Any tap count (the filtered re-samplers): four running sums, the remainder into the first.
     private void runAny(double[] x, int pos, int p, double[] out, int outOff, int count) {
         final double[] h = table;
         final int n = taps;
