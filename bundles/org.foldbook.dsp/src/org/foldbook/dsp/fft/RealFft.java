@@ -1,5 +1,6 @@
 package org.foldbook.dsp.fft;
 
+import java.util.Arrays;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.ThreadFactory;
@@ -122,7 +123,7 @@ public final class RealFft {
      */
     public void powerInPlace(double[] work, double[] power) {
         requireLength("power", power, bins());
-        java.util.Arrays.fill(power, 0, bins(), 0.0);
+        Arrays.fill(power, 0, bins(), 0.0);
         accumulatePowerInPlace(work, power);
     }
 

@@ -1,6 +1,7 @@
 package org.foldbook.dsp.peaks;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
 import java.util.Objects;
@@ -135,7 +136,7 @@ public final class PeakFinder {
                 out[m++] = peaks[p];
             }
         }
-        return java.util.Arrays.copyOf(out, m);
+        return Arrays.copyOf(out, m);
     }
 
     private static void requireCount(double[] a, int count) {

@@ -1,5 +1,8 @@
 package org.foldbook.dsp.window;
 
+import java.util.Arrays;
+import java.util.Locale;
+
 import org.foldbook.dsp.fft.RealFft;
 
 /**
@@ -186,8 +189,8 @@ public final class Window {
     private static int[] topLocalMaxima(double[] mag, int from, int count) {
         int[] idx = new int[count];
         double[] val = new double[count];
-        java.util.Arrays.fill(idx, -1);
-        java.util.Arrays.fill(val, -1);
+        Arrays.fill(idx, -1);
+        Arrays.fill(val, -1);
         for (int j = Math.max(1, from); j < mag.length; j++) {
             boolean max = mag[j] >= mag[j - 1] && (j + 1 == mag.length || mag[j] >= mag[j + 1]);
             if (!max || mag[j] <= val[count - 1]) {
@@ -250,6 +253,6 @@ public final class Window {
 
     @Override
     public String toString() {
-        return shape.name() + "(" + w.length + ", " + symmetry.name().toLowerCase(java.util.Locale.ROOT) + ")";
+        return shape.name() + "(" + w.length + ", " + symmetry.name().toLowerCase(Locale.ROOT) + ")";
     }
 }
