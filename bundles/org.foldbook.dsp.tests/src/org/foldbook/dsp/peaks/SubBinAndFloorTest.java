@@ -46,7 +46,7 @@ class SubBinAndFloorTest {
             for (double phase : new double[] {0.0, 1.0, 2.5}) {
                 double bin = 500 + 0.05 * i;
                 AmplitudeSpectrum s = est.amplitude(tone(bin, 2.0, phase), FS, Unit.VOLT);
-                List<SpectralPeak> peaks = finder.findInLevels(s.levelsDb(1.0), s.bins(), s.binWidth());
+                List<SpectralPeak> peaks = finder.find(s);
                 // the highest peak is the tone (a noise-free tone's sidelobes are peaks too)
                 SpectralPeak p = peaks.stream().max(java.util.Comparator.comparingDouble(SpectralPeak::binLevelDb))
                         .orElseThrow();

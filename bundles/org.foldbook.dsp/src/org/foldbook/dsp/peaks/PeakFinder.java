@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Objects;
 
 import org.foldbook.dsp.Check;
+import org.foldbook.dsp.spectrum.AmplitudeSpectrum;
 import org.foldbook.dsp.spectrum.Decibels;
 import org.foldbook.dsp.spectrum.PowerSpectrum;
 import org.foldbook.dsp.window.Window;
@@ -52,6 +53,11 @@ public final class PeakFinder {
     /** Peaks of a power estimate, levels in dB re 1 of its {@link PowerSpectrum#valueUnit()}. */
     public List<SpectralPeak> find(PowerSpectrum spectrum) {
         return findInPower(spectrum.values(), spectrum.bins(), spectrum.binWidth());
+    }
+
+    /** Peaks of an amplitude spectrum, levels in dB re 1 of its {@link AmplitudeSpectrum#valueUnit()}. */
+    public List<SpectralPeak> find(AmplitudeSpectrum spectrum) {
+        return findInLevels(spectrum.levelsDb(1.0), spectrum.bins(), spectrum.binWidth());
     }
 
     /**
