@@ -82,7 +82,7 @@ class CrashDuringSaveTest {
         int killedWhileWriting = 0;
         List<String> seen = new ArrayList<>();
         for (int kill = 0; kill < KILLS; kill++) {
-            Process child = new ProcessBuilder(javaExecutable(), "-Xmx256m", "-cp", classPath,
+            Process child = new ProcessBuilder(javaExecutable(), "-Xmx256m", "-XX:+UseSerialGC", "-XX:TieredStopAtLevel=1", "-cp", classPath,
                     SaveLoopChild.class.getName(), target.toString(), Integer.toString(DEVICES),
                     Long.toString(lastSeen)).redirectErrorStream(true).start();
             try (BufferedReader out = new BufferedReader(
