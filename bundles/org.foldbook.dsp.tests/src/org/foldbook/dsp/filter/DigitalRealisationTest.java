@@ -91,6 +91,19 @@ class DigitalRealisationTest {
     }
 
     @Test
+    @DisplayName("silence after an impulse decays to exact zeros (no endless subnormal tail)")
+    void silenceBecomesZero() {
+        SecondOrderSections d = AnalogLowPass.elliptic(6, 0.1, 90, 1000).toDigital(10_000);
+        double[] v = new double[200_000];
+        v[0] = 1;
+        d.newFilter().filterInPlace(v);
+        for (int i = 100_000; i < v.length; i++) {
+            assertEquals(0.0, v[i], 0.0, "sample " + i);
+        }
+        assertTrue(Math.abs(v[10]) > 1e-3, "the impulse response itself is there");
+    }
+
+    @Test
     @DisplayName("bilinear warping: digital attenuation at f = analog at fc·tan(πf/fs)/tan(πfc/fs) (Oppenheim & Schafer §7.1)")
     void frequencyWarping() {
         double fc = 1000;

@@ -18,6 +18,9 @@ public final class SosFilter {
     /** Samples per chunk (8 KiB of doubles). */
     private static final int CHUNK = 1024;
 
+    /** State magnitudes below this are set to 0 at the end of each chunk (see {@link #filter}). */
+    static final double FLUSH_BELOW = 1e-250;
+
     private final double[] c;
     private final double[] state; // s1, s2 per section
     private final int sections;
@@ -74,6 +77,8 @@ public final class SosFilter {
     /**
      * Filters {@code length} samples from {@code in[inOffset…]} into {@code out[outOffset…]}. The
      * two ranges may be the same range of the same array (in place) but must not otherwise overlap.
+     * State values smaller than {@value #FLUSH_BELOW} in magnitude are set to 0 at chunk ends, so
+     * silence after a signal runs on subnormal numbers for at most one chunk, then on exact zeros.
      */
     public void filter(double[] in, int inOffset, double[] out, int outOffset, int length) {
         if (in == null || out == null) {
@@ -110,8 +115,10 @@ public final class SosFilter {
                     s2 = b2 * x - a2 * y;
                     out[dstOff + i] = y;
                 }
-                state[2 * s] = s1;
-                state[2 * s + 1] = s2;
+                // A decaying state would otherwise reach subnormal numbers after a long silence, and
+                // subnormal arithmetic can be many times slower; nothing measured is that small.
+                state[2 * s] = Math.abs(s1) < FLUSH_BELOW ? 0 : s1;
+                state[2 * s + 1] = Math.abs(s2) < FLUSH_BELOW ? 0 : s2;
                 src = out;
                 srcOff = dstOff;
             }
