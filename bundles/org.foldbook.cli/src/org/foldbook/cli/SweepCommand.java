@@ -11,6 +11,7 @@ import java.util.concurrent.CancellationException;
 import org.foldbook.dsp.filter.AnalogFilter;
 import org.foldbook.dsp.filter.AnalogLowPass;
 import org.foldbook.dsp.filter.BesselNormalization;
+import org.foldbook.dsp.resample.ModelledChannel;
 import org.foldbook.dsp.sweep.FoldPreview;
 import org.foldbook.dsp.sweep.RateLadder;
 import org.foldbook.dsp.sweep.RateResult;
@@ -112,14 +113,33 @@ final class SweepCommand {
                 + spec + "'");
     }
 
+    /** The chain from --filter, --digitizer and --exposure (each optional; none of them: the bare sampler). */
+    static ModelledChannel channel(SweepOptions o) {
+        ModelledChannel c = ModelledChannel.none();
+        if (o.filter().isPresent()) {
+            c = c.withAnalog(filter(o.filter().get()));
+        }
+        if (o.digitizer().isPresent()) {
+            double[] d = o.digitizer().get();
+            try {
+                c = c.withDigitizerFilter(new ModelledChannel.DigitizerFilter(d[0], d[1], d[2]));
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException("--digitizer: " + e.getMessage(), e);
+            }
+        }
+        if (o.exposure() > 0) {
+            c = c.withExposure(o.exposure());
+        }
+        return c;
+    }
+
     static Resampling mode(SweepOptions o) {
         return switch (o.mode()) {
             case "bare" -> Resampling.bare();
-            case "modelled" -> Resampling.modelledFilter(filter(o.filter().orElseThrow()));
+            case "modelled" -> Resampling.modelledChannel(channel(o));
             case "ideal" -> Resampling.idealDecimator();
             case "peer-poly" -> Resampling.peerResamplePoly();
-            case "preview" -> o.filter().isPresent() ? Resampling.modelledFilter(filter(o.filter().get()))
-                    : Resampling.bare();
+            case "preview" -> Resampling.modelledChannel(channel(o));
             default -> throw new IllegalArgumentException("--mode " + o.mode());
         };
     }

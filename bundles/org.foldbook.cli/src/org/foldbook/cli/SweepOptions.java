@@ -22,6 +22,9 @@ import java.util.Optional;
  * @param mode       bare, modelled, ideal, peer-poly or preview
  * @param filter     chain filter for modelled/preview: {@code butterworth:ORDER:HZ}, {@code bessel:ORDER:HZ},
  *                   {@code rc:HZ}
+ * @param digitizer  digitizer built-in filter for modelled/preview: pass fraction, stop fraction (of the new
+ *                   rate), attenuation dB; empty: none
+ * @param exposure   camera exposure time in seconds for modelled/preview (0: none)
  * @param bandLow    band summary low edge (NaN: no band)
  * @param bandHigh   band summary high edge
  * @param threads    worker threads
@@ -30,13 +33,15 @@ import java.util.Optional;
  * @param quiet      no progress lines on standard error
  */
 record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Path> grid, double from, double to,
-        int steps, String spacing, double[] rates, int maxDen, String mode, Optional<String> filter, double bandLow,
+        int steps, String spacing, double[] rates, int maxDen, String mode, Optional<String> filter,
+        Optional<double[]> digitizer, double exposure, double bandLow,
         double bandHigh, int threads, String format, Optional<Path> output, boolean quiet) {
 
     static final String USAGE = """
             usage: foldbook sweep --input FILE [--rate HZ] [--channel N]
                      (--grid FILE | --to HZ --steps N [--from HZ] [--spacing geom|lin] | --rates HZ,HZ,...)
                      [--max-den D] [--mode bare|modelled|ideal|peer-poly|preview] [--filter KIND:...]
+                     [--digitizer PASS:STOP:DB] [--exposure SECONDS]
                      [--band LO:HI] [--threads N] [--format json|csv] [--output FILE] [--quiet]
               --input FILE    WAV recording, or raw little-endian float64 samples (then --rate is required)
               --rate HZ       sample rate of a raw float64 recording
@@ -50,6 +55,9 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
                               ideal: a correct decimator (0.45/0.5 fs, 100 dB); peer-poly: scipy
                               resample_poly's defaults; preview: fold the source PSD through --filter (or none)
               --filter        butterworth:ORDER:CUTOFF_HZ, bessel:ORDER:CUTOFF_HZ or rc:CUTOFF_HZ
+              --digitizer P:S:DB  a digitizer's built-in filter: pass band to P*fs, S*fs on at least DB dB down
+                              (delta-sigma parts: about 0.45:0.55:90, common practice)
+              --exposure S    a camera's exposure time in seconds (box-car integration)
               --band LO:HI    also report the lowest rate keeping LO..HI Hz alias-free
               --threads N     worker threads (default: all cores)
               --format        json (default) or csv
@@ -69,6 +77,8 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
         int maxDen = 1000;
         String mode = "bare";
         String filter = null;
+        double[] digitizer = null;
+        double exposure = 0;
         double bandLow = Double.NaN;
         double bandHigh = Double.NaN;
         int threads = Runtime.getRuntime().availableProcessors();
@@ -107,6 +117,14 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
                 case "--max-den" -> maxDen = integer(a, v, 1);
                 case "--mode" -> mode = oneOf(a, v, "bare", "modelled", "ideal", "peer-poly", "preview");
                 case "--filter" -> filter = v;
+                case "--digitizer" -> {
+                    String[] p = v.split(":");
+                    if (p.length != 3) {
+                        throw new IllegalArgumentException("--digitizer must be PASS:STOP:DB, was '" + v + "'");
+                    }
+                    digitizer = new double[] {positive(a, p[0]), positive(a, p[1]), positive(a, p[2])};
+                }
+                case "--exposure" -> exposure = positive(a, v);
                 case "--band" -> {
                     String[] p = v.split(":");
                     if (p.length != 2) {
@@ -134,11 +152,13 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
         if ((steps > 0) != !Double.isNaN(to)) {
             throw new IllegalArgumentException("--to and --steps go together");
         }
-        if (mode.equals("modelled") && filter == null) {
-            throw new IllegalArgumentException("--mode modelled needs --filter (e.g. butterworth:4:8000)");
+        if (mode.equals("modelled") && filter == null && digitizer == null && exposure == 0) {
+            throw new IllegalArgumentException(
+                    "--mode modelled needs --filter (e.g. butterworth:4:8000), --digitizer or --exposure");
         }
         return new SweepOptions(input, Optional.ofNullable(rate), channel, Optional.ofNullable(grid), from, to,
-                steps, spacing, rates, maxDen, mode, Optional.ofNullable(filter), bandLow, bandHigh, threads, format,
+                steps, spacing, rates, maxDen, mode, Optional.ofNullable(filter),
+                Optional.ofNullable(digitizer), exposure, bandLow, bandHigh, threads, format,
                 Optional.ofNullable(output), quiet);
     }
 

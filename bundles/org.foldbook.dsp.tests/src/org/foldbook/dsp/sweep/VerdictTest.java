@@ -88,6 +88,26 @@ class VerdictTest {
     }
 
     @Test
+    @DisplayName("modelled camera exposure: a folded tone is attenuated by |sin(pi f T)/(pi f T)| (box-car, common practice)")
+    void modelledExposureAttenuation() {
+        double fs0 = 102_400;
+        double exposure = 0.9 / 10_240;   // 90 % of the frame interval at 10.24 frames/s x 1000
+        double[] x = Tones.of(1 << 18, fs0, new double[] {1000, 6000}, new double[] {1, 1}, 1e-6, 12);
+        RateLadder ladder = RateLadder.ofRates(fs0, new double[] {fs0, fs0 / 10}, 1000);
+        SweepResult r = engine.run(x, ladder,
+                Resampling.modelledChannel(org.foldbook.dsp.resample.ModelledChannel.none().withExposure(exposure)),
+                SpectrumSettings.DEFAULT, SweepProgress.NONE);
+        SourceFate t6 = r.rates().get(1).fate(1);
+        assertEquals(Verdict.FOLDS, t6.verdict());
+        double u = Math.PI * 6000 * exposure;
+        double expect = 20 * Math.log10(Math.abs(Math.sin(u) / u));     // -4.41 dB
+        // the exposure sum approximates the integral within (pi f/fs0)^2/3 relative (0.06 dB here)
+        assertEquals(expect, t6.gainDb(), 0.1);
+        double u1 = Math.PI * 1000 * exposure;
+        assertEquals(20 * Math.log10(Math.sin(u1) / u1), r.rates().get(1).fate(0).gainDb(), 0.05);
+    }
+
+    @Test
     @DisplayName("summaries: lowest true rate just above 2f (Nyquist), first fold just below; band summary")
     void summariesFollowNyquist() {
         double fs0 = 100_000;

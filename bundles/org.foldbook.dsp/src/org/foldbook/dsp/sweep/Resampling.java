@@ -1,12 +1,16 @@
 package org.foldbook.dsp.sweep;
 
+import java.util.Map;
 import java.util.Objects;
+import java.util.concurrent.ConcurrentHashMap;
 
 import org.foldbook.dsp.filter.AnalogFilter;
 import org.foldbook.dsp.filter.SecondOrderSections;
 import org.foldbook.dsp.resample.BareSampler;
 import org.foldbook.dsp.resample.IdealDecimator;
 import org.foldbook.dsp.resample.KaiserPolyphaseResampler;
+import org.foldbook.dsp.resample.ModelledChannel;
+import org.foldbook.dsp.resample.ModelledChannelResampler;
 import org.foldbook.dsp.resample.Resampler;
 
 /**
@@ -41,13 +45,22 @@ public interface Resampling {
     }
 
     /**
-     * Mode 2: the chain's own analog filter, realised at the source rate ({@link AnalogFilter#toDigital}, the
-     * bilinear transform pre-warped at the cutoff), then sampled bare. Valid only as far as the source
-     * rate's headroom allows: the realisation follows the analog model closely well below the source Nyquist
-     * frequency and not near it, so content the model would attenuate close to fs0/2 is not represented.
+     * Mode 2 with an analog filter only: {@link #modelledChannel} of {@code ModelledChannel.none().withAnalog(filter)}.
      */
     static Resampling modelledFilter(AnalogFilter filter) {
-        return new ModelledFilter(filter);
+        return new ModelledFilter(ModelledChannel.none().withAnalog(Objects.requireNonNull(filter, "filter")));
+    }
+
+    /**
+     * Mode 2: the channel's own modelled chain ({@link ModelledChannel}: analog filters, a digitizer's
+     * built-in filter, a camera's exposure), then sampled bare. The analog filters are realised at the source
+     * rate ({@link AnalogFilter#toDigital}, bilinear pre-warped at each cutoff) and run once over the whole
+     * recording for all rates; the digitizer filter and exposure depend on the rate and go into each rate's
+     * sampler ({@link ModelledChannelResampler}). Valid only as far as the source rate's headroom allows: the
+     * realisation follows the analog model closely well below the source Nyquist frequency, not near it.
+     */
+    static Resampling modelledChannel(ModelledChannel channel) {
+        return new ModelledFilter(Objects.requireNonNull(channel, "channel"));
     }
 
     /**
@@ -183,17 +196,20 @@ public interface Resampling {
         }
     }
 
-    /** The modelled analog filter at the source rate, then the bare sampler. */
+    /** The modelled channel: analog part once at the source rate, the rest per rate. */
     final class ModelledFilter implements Resampling {
-        private final AnalogFilter filter;
-        private final java.util.Map<Double, SecondOrderSections> realised = new java.util.concurrent.ConcurrentHashMap<>();
+        private final ModelledChannel channel;
+        private final boolean analogOnly;
+        private final Map<Double, SecondOrderSections> realised = new ConcurrentHashMap<>();
+        private final Map<RateStep, ModelledChannelResampler> samplers = new ConcurrentHashMap<>();
 
-        ModelledFilter(AnalogFilter filter) {
-            this.filter = Objects.requireNonNull(filter, "filter");
+        ModelledFilter(ModelledChannel channel) {
+            this.channel = channel;
+            this.analogOnly = channel.digitizerFilter() == null && !(channel.exposureSeconds() > 0);
         }
 
-        public AnalogFilter filter() {
-            return filter;
+        public ModelledChannel channel() {
+            return channel;
         }
 
         @Override
@@ -201,13 +217,27 @@ public interface Resampling {
             return "modelled";
         }
 
+        /** The analog filters in series, realised at {@code sourceRate}; null when there are none. */
         private SecondOrderSections realisedAt(double sourceRate) {
-            return realised.computeIfAbsent(sourceRate, filter::toDigital);
+            if (channel.analogFilters().isEmpty()) {
+                return null;
+            }
+            return realised.computeIfAbsent(sourceRate, fs -> {
+                SecondOrderSections all = null;
+                for (AnalogFilter a : channel.analogFilters()) {
+                    SecondOrderSections s = a.toDigital(fs);
+                    all = all == null ? s : all.followedBy(s);
+                }
+                return all;
+            });
         }
 
         @Override
         public double[] prepare(double[] source, double sourceRate) {
             SecondOrderSections sos = realisedAt(sourceRate);
+            if (sos == null) {
+                return source;
+            }
             double[] y = new double[source.length];
             sos.newFilter().filter(source, 0, y, 0, source.length);
             return y;
@@ -215,17 +245,30 @@ public interface Resampling {
 
         @Override
         public Resampler forRate(RateStep step) {
-            return BareSampler.of(step.ratio());
+            if (analogOnly) {
+                return BareSampler.of(step.ratio());
+            }
+            return samplers.computeIfAbsent(step, st -> ModelledChannelResampler.of(st.ratio(), st.sourceRate(),
+                    channel, ModelledChannelResampler.AnalogStage.ALREADY_APPLIED));
         }
 
         /**
-         * |H(f)|² of the realisation at the source rate, i.e. what this mode really applies; it follows the
-         * analog model's {@code filter().magnitude(f)} well below the source Nyquist frequency and falls
-         * faster near it (bilinear warping).
+         * |H(f)|² this mode really applies: the analog filters' realisation at the source rate (it follows
+         * the analog models well below the source Nyquist frequency and falls faster near it), times the
+         * digitizer filter and exposure as realised for the rate.
          */
         @Override
         public double powerGain(double frequencyHz, RateStep step) {
-            double m = realisedAt(step.sourceRate()).magnitude(frequencyHz);
+            SecondOrderSections sos = realisedAt(step.sourceRate());
+            double m = sos == null ? 1.0 : sos.magnitude(frequencyHz);
+            if (!analogOnly) {
+                ModelledChannelResampler r = (ModelledChannelResampler) forRate(step);
+                double analogModel = 1;
+                for (AnalogFilter a : channel.analogFilters()) {
+                    analogModel *= a.magnitude(frequencyHz);
+                }
+                m *= analogModel > 0 ? r.magnitude(frequencyHz) / analogModel : 0.0;
+            }
             return m * m;
         }
     }
