@@ -58,26 +58,35 @@ final class WindowedSegment {
     }
 
     /**
-     * {@code sum x[start .. start+n)} with four partial sums: a single running sum is one long chain of
-     * dependent additions (the JIT may not reorder them), four chains keep the adder busy. A NaN or infinity
-     * anywhere in the segment makes the result non-finite.
+     * {@code sum x[start .. start+n)} with eight partial sums: a single running sum is one long chain of
+     * dependent additions (the JIT does not reorder floating-point adds), eight chains keep both adders
+     * busy. A NaN or infinity anywhere in the segment makes the result non-finite.
      */
     private double sum(double[] x, int start) {
         double s0 = 0;
         double s1 = 0;
         double s2 = 0;
         double s3 = 0;
-        int j = 0;
-        for (; j + 3 < n; j += 4) {
-            s0 += x[start + j];
-            s1 += x[start + j + 1];
-            s2 += x[start + j + 2];
-            s3 += x[start + j + 3];
+        double s4 = 0;
+        double s5 = 0;
+        double s6 = 0;
+        double s7 = 0;
+        int j = start;
+        int end = start + n;
+        for (; j + 7 < end; j += 8) {
+            s0 += x[j];
+            s1 += x[j + 1];
+            s2 += x[j + 2];
+            s3 += x[j + 3];
+            s4 += x[j + 4];
+            s5 += x[j + 5];
+            s6 += x[j + 6];
+            s7 += x[j + 7];
         }
-        for (; j < n; j++) {
-            s0 += x[start + j];
+        for (; j < end; j++) {
+            s0 += x[j];
         }
-        return (s0 + s1) + (s2 + s3);
+        return ((s0 + s1) + (s2 + s3)) + ((s4 + s5) + (s6 + s7));
     }
 
     /** {@code sum (j - (n-1)/2) x[start+j]}, four partial sums. */
