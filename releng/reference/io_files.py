@@ -65,6 +65,14 @@ with h5py.File(os.path.join(H5, "channels-first.h5"), "w") as f:
     d.attrs["units"] = "uV"
 dump(os.path.join(H5, "channels-first.f64"), planes.T.astype(np.float64))
 
+# a hard link that makes the group graph cyclic (/loop/again is /loop itself), one dataset inside
+with h5py.File(os.path.join(H5, "cyclic-links.h5"), "w") as f:
+    g = f.create_group("loop")
+    d = g.create_dataset("pressure", data=x[:100])
+    d.attrs["sample_rate"] = 2000.0
+    g["again"] = g
+dump(os.path.join(H5, "cyclic-links.f64"), x[:100].reshape(-1, 1))
+
 # --- delimited text -----------------------------------------------------------------------------------
 def rows_to_text(path, header, cols, sep, decimal, fmt=repr):
     with open(path, "w", encoding="utf-8", newline="\n") as out:

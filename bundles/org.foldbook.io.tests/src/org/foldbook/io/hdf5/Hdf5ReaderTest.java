@@ -34,7 +34,9 @@ class Hdf5ReaderTest {
             "accel-1d,        1,  1000, 2000,  FLOAT64",
             "daq-2d,          3,   500, 10000, FLOAT32",
             "counts-chunked,  1,  3000, 10000, INT16",
-            "channels-first,  2,   400, 1000,  INT32"})
+            "channels-first,  2,   400, 1000,  INT32",
+            // /loop/again is a hard link back to /loop: detection must not recurse forever
+            "cyclic-links,    1,   100, 2000,  FLOAT64"})
     void matchesNumpyDump(String name, int channels, long frames, double rate, SampleType type) throws IOException {
         Path p = TestFiles.copy("hdf5/h5py/" + name + ".h5", dir);
         double[][] expected = TestFiles.f64("hdf5/h5py/" + name + ".f64", channels);

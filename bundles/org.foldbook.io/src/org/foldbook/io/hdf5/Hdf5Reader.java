@@ -91,7 +91,7 @@ public final class Hdf5Reader implements RecordingReader {
             ds = d;
         } else {
             List<Dataset> found = new ArrayList<>();
-            collect(hdf, found);
+            collect(hdf, found, new java.util.HashSet<>());
             if (found.size() != 1) {
                 throw new RecordingFormatException(file, "/", found.isEmpty() ? "no numeric 1-D or 2-D dataset"
                         : "several numeric datasets, choose one: " + found.stream().map(Node::getPath).toList());
@@ -150,12 +150,19 @@ public final class Hdf5Reader implements RecordingReader {
         return new Hdf5Reader(info, ch, hdf, ds, axis, block);
     }
 
-    private static void collect(Group g, List<Dataset> out) {
+    /** Depth-first search; hard links can make the group graph cyclic, so each object is visited once. */
+    private static void collect(Group g, List<Dataset> out, java.util.Set<Long> visited) {
+        if (!visited.add(g.getAddress())) {
+            return;
+        }
         for (Node n : g) {
-            if (n instanceof Dataset d && numeric(d)) {
+            if (n.isLink()) {
+                continue;
+            }
+            if (n instanceof Dataset d && numeric(d) && visited.add(d.getAddress())) {
                 out.add(d);
-            } else if (n instanceof Group sub && !n.isLink()) {
-                collect(sub, out);
+            } else if (n instanceof Group sub) {
+                collect(sub, out, visited);
             }
         }
     }
