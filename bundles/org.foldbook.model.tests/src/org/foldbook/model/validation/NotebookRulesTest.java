@@ -54,6 +54,7 @@ class NotebookRulesTest {
         Path data = folder.resolve("data/run1.wav");
         Files.createDirectories(data.getParent());
         Files.write(data, new byte[0]); // its logged SHA-256 is that of the empty message
+        recording.setSizeBytes(0L); // size unknown: only the checksum is compared
         NotebookStore.save(notebook, folder.resolve("bench.foldbook"));
     }
 
@@ -197,11 +198,17 @@ class NotebookRulesTest {
     void recordingFile() throws IOException {
         Path data = folder.resolve("data/run1.wav");
         Files.write(data, "abc".getBytes(StandardCharsets.US_ASCII));
+        recording.setSizeBytes(0L);
         Diagnostic changed = single(Findings.RECORDING_CHECKSUM_CHANGED);
         // FIPS 180-2, appendix B.1: SHA-256("abc")
         assertTrue(changed.getMessage().contains("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad"),
                 changed.getMessage());
         assertTrue(changed.getMessage().contains("Restore the original"), changed.getMessage());
+        // a logged size that differs is reported without hashing
+        recording.setSizeBytes(44L);
+        assertTrue(single(Findings.RECORDING_CHECKSUM_CHANGED).getMessage().contains("is now 3 bytes, but 44 bytes"));
+        recording.setSizeBytes(3L);
+        assertTrue(single(Findings.RECORDING_CHECKSUM_CHANGED).getMessage().contains("SHA-256 now"));
         Files.delete(data);
         Diagnostic missing = single(Findings.RECORDING_FILE_MISSING);
         assertTrue(missing.getMessage().contains(data.toString()), missing.getMessage());

@@ -43,8 +43,18 @@ public final class RecordingFileRule {
                     "no SHA-256 was logged, so a changed file would go unnoticed",
                     "Log the recording's checksum now, while the file is known to be the original");
         }
+        long size;
         String actual;
         try {
+            size = Files.size(file);
+            if (recording.getSizeBytes() > 0 && size != recording.getSizeBytes()) {
+                // cheaper than hashing, and says more
+                return report(diagnostics, Diagnostic.ERROR, RECORDING_CHECKSUM_CHANGED, recording,
+                        "the data file " + file + " is now " + size + " bytes, but " + recording.getSizeBytes()
+                                + " bytes were logged",
+                        "Restore the original file from a backup; if the change is intended, log it as a new"
+                                + " recording");
+            }
             actual = FileChecksum.sha256(file);
         } catch (IOException e) {
             return report(diagnostics, Diagnostic.ERROR, RECORDING_FILE_MISSING, recording,

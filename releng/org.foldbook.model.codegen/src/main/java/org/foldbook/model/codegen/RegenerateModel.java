@@ -86,6 +86,7 @@ public final class RegenerateModel {
         if (result.getSeverity() == Diagnostic.ERROR) {
             throw new IllegalStateException("generation from " + genmodelFile + " failed: " + describe(result));
         }
+        requireDelegatedConstraints(bundle, fresh);
         System.out.println("Generated model code for " + bundleName + " into " + fresh.getModelDirectory()
                 + " (" + describe(result) + ")");
     }
@@ -110,6 +111,39 @@ public final class RegenerateModel {
         fresh.reconcile(old);
         fresh.getUsedGenPackages().addAll(fresh.computeMissingUsedGenPackages());
         return fresh;
+    }
+
+    /**
+     * A constraint the generator has just added comes with a TODO body that always passes. Fail until
+     * it delegates to hand code (see MODEL.md), so that a new rule cannot silently do nothing.
+     */
+    private static void requireDelegatedConstraints(Path bundle, GenModel genModel) throws IOException {
+        String marker = "// TODO implement the constraint";
+        for (GenPackage genPackage : genModel.getGenPackages()) {
+            if (!genPackage.hasConstraints()) {
+                continue;
+            }
+            String validator = genPackage.getUtilitiesPackageName().replace('.', '/') + "/"
+                    + genPackage.getValidatorClassName() + ".java";
+            String relative = genModel.getModelDirectory().replaceFirst("^/[^/]+/", "") + "/" + validator;
+            Path file = bundle.resolve(relative);
+            List<String> lines = Files.readAllLines(file);
+            List<String> undelegated = new ArrayList<>();
+            for (int i = 0; i < lines.size(); i++) {
+                if (lines.get(i).contains(marker)) {
+                    for (int j = i; j >= 0; j--) {
+                        if (lines.get(j).contains("public boolean validate")) {
+                            undelegated.add(lines.get(j).strip().replaceFirst("\\(.*", ""));
+                            break;
+                        }
+                    }
+                }
+            }
+            if (!undelegated.isEmpty()) {
+                throw new IllegalStateException(file + ": constraints without a delegation to src/.../validation"
+                        + " (replace the TODO body by one line and mark it @generated NOT): " + undelegated);
+            }
+        }
     }
 
     private static String describe(Diagnostic diagnostic) {
