@@ -87,8 +87,10 @@ class HostileFilesTest {
         assertFalse(e.getMessage().contains("TOP-SECRET-CONTENT"), e.getMessage());
         // the same through a resource set, as the workbench opens files by content type
         var resourceSet = NotebookStore.newResourceSet();
-        assertThrows(RuntimeException.class,
+        RuntimeException wrapped = assertThrows(RuntimeException.class,
                 () -> resourceSet.getResource(URI.createFileURI(file.toString()), true));
+        assertTrue(wrapped.getCause() instanceof NotebookLoadException, wrapped::toString);
+        assertTrue(wrapped.getCause().getMessage().startsWith(file.toString()), wrapped.getCause().getMessage());
     }
 
     @Test

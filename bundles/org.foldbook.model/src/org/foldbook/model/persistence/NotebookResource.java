@@ -57,10 +57,18 @@ public class NotebookResource extends XMIResourceImpl {
         secured.put(XMLResource.OPTION_RECORD_UNKNOWN_FEATURE, Boolean.TRUE);
         SecureXml.enforce(secured);
         previousVersionRead = false;
-        super.doLoad(inputStream, secured);
-        if (previousVersionRead) {
-            NotebookMigration.migratePrevious(this);
-            setModified(true);
+        try {
+            super.doLoad(inputStream, secured);
+            if (previousVersionRead) {
+                NotebookMigration.migratePrevious(this);
+                setModified(true);
+            }
+        } catch (IOException | RuntimeException e) {
+            // the same clear message (file, line, problem) whoever opens the file, the workbench included
+            if (getURI() != null && getURI().isFile() && !(e instanceof NotebookLoadException)) {
+                throw NotebookStore.LoadProblems.describe(java.nio.file.Path.of(getURI().toFileString()), this, e);
+            }
+            throw e;
         }
     }
 

@@ -79,6 +79,9 @@ public final class NotebookStore {
         Resource resource = createResource(resourceSet, file); // also a .bak or any other name
         try {
             resource.load(null);
+        } catch (NotebookLoadException e) {
+            resourceSet.getResources().remove(resource);
+            throw e;
         } catch (IOException | RuntimeException e) {
             resourceSet.getResources().remove(resource);
             throw LoadProblems.describe(file, resource, e);
