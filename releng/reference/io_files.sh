@@ -25,6 +25,7 @@ make() {
 }
 
 make u8-mono          1  8000 unsigned-integer 8
+make s16-mono         1 32000 signed-integer  16
 make s16-stereo       2 48000 signed-integer  16
 make s16-3ch          3 44100 signed-integer  16
 make s24-mono         1 96000 signed-integer  24

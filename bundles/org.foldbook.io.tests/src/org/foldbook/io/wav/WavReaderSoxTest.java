@@ -35,6 +35,7 @@ class WavReaderSoxTest {
     @ParameterizedTest(name = "{0}: sox float64 dump")
     @CsvSource({
             "u8-mono,      1,  8000, UINT8,   0",
+            "s16-mono,     1, 32000, INT16,   0",
             "s16-stereo,   2, 48000, INT16,   0",
             "s16-3ch,      3, 44100, INT16,   0",
             "s24-mono,     1, 96000, INT24,   0",
@@ -73,7 +74,7 @@ class WavReaderSoxTest {
 
     /** Every layout: the JDK 25 WAV readers accept them all (PCM 8-32 bit, extensible, IEEE float 32/64). */
     @ParameterizedTest(name = "{0}: javax.sound.sampled")
-    @CsvSource({"u8-mono", "s16-stereo", "s16-3ch", "s24-mono", "s24-stereo", "s24-6ch", "s32-stereo", "f32-stereo", "f32-4ch", "f64-mono", "f64-stereo"})
+    @CsvSource({"u8-mono", "s16-mono", "s16-stereo", "s16-3ch", "s24-mono", "s24-stereo", "s24-6ch", "s32-stereo", "f32-stereo", "f32-4ch", "f64-mono", "f64-stereo"})
     void matchesJdkDecoder(String name) throws IOException, UnsupportedAudioFileException {
         Path wav = TestFiles.copy("wav/sox/" + name + ".wav", dir);
         try (AudioInputStream jdk = AudioSystem.getAudioInputStream(wav.toFile());

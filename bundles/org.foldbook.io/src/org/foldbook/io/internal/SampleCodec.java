@@ -106,33 +106,66 @@ public final class SampleCodec {
         }
     }
 
-    // The two layouts that dominate lab WAV files get their own tight loops.
+    // The two layouts that dominate lab WAV files get their own tight loops: frame-major, so the input
+    // block is read once front to back, with mono and stereo unrolled over channels.
     private long decode16le(byte[] src, int p, int frames, double[][] dest, int off) {
-        int ch = channels;
-        for (int c = 0; c < ch; c++) {
-            double[] d = dest[c];
-            double s = scale[c];
-            double o = offset[c];
-            int q = p + 2 * c;
-            int step = 2 * ch;
-            for (int f = 0; f < frames; f++, q += step) {
-                d[off + f] = (short) S16_LE.get(src, q) * s + o;
+        if (channels == 1) {
+            double[] d0 = dest[0];
+            double s0 = scale[0];
+            double o0 = offset[0];
+            for (int f = 0; f < frames; f++, p += 2) {
+                d0[off + f] = (short) S16_LE.get(src, p) * s0 + o0;
+            }
+        } else if (channels == 2) {
+            double[] d0 = dest[0];
+            double[] d1 = dest[1];
+            double s0 = scale[0];
+            double s1 = scale[1];
+            double o0 = offset[0];
+            double o1 = offset[1];
+            for (int f = 0; f < frames; f++, p += 4) {
+                d0[off + f] = (short) S16_LE.get(src, p) * s0 + o0;
+                d1[off + f] = (short) S16_LE.get(src, p + 2) * s1 + o1;
+            }
+        } else {
+            for (int f = 0; f < frames; f++) {
+                for (int c = 0; c < channels; c++, p += 2) {
+                    dest[c][off + f] = (short) S16_LE.get(src, p) * scale[c] + offset[c];
+                }
             }
         }
         return -1;
     }
 
+    /** Little-endian 24-bit: the low 16 bits as one unsigned short, the top byte sign-extends. */
+    private static int s24le(byte[] src, int q) {
+        return (src[q + 2] << 16) | ((short) S16_LE.get(src, q) & 0xFFFF);
+    }
+
     private long decode24le(byte[] src, int p, int frames, double[][] dest, int off) {
-        int ch = channels;
-        for (int c = 0; c < ch; c++) {
-            double[] d = dest[c];
-            double s = scale[c];
-            double o = offset[c];
-            int q = p + 3 * c;
-            int step = 3 * ch;
-            for (int f = 0; f < frames; f++, q += step) {
-                int v = (src[q + 2] << 16) | ((src[q + 1] & 0xFF) << 8) | (src[q] & 0xFF);
-                d[off + f] = v * s + o;
+        if (channels == 1) {
+            double[] d0 = dest[0];
+            double s0 = scale[0];
+            double o0 = offset[0];
+            for (int f = 0; f < frames; f++, p += 3) {
+                d0[off + f] = s24le(src, p) * s0 + o0;
+            }
+        } else if (channels == 2) {
+            double[] d0 = dest[0];
+            double[] d1 = dest[1];
+            double s0 = scale[0];
+            double s1 = scale[1];
+            double o0 = offset[0];
+            double o1 = offset[1];
+            for (int f = 0; f < frames; f++, p += 6) {
+                d0[off + f] = s24le(src, p) * s0 + o0;
+                d1[off + f] = s24le(src, p + 3) * s1 + o1;
+            }
+        } else {
+            for (int f = 0; f < frames; f++) {
+                for (int c = 0; c < channels; c++, p += 3) {
+                    dest[c][off + f] = s24le(src, p) * scale[c] + offset[c];
+                }
             }
         }
         return -1;

@@ -50,11 +50,16 @@ public class WavReadBenchmark {
     @Param({"16", "24"})
     int bits;
 
+    /** Frames per read call: 4096 (a typical FFT block, output stays in cache) and 65536. */
+    @Param({"4096", "65536"})
+    int blockFrames;
+
     Path file;
-    double[][] block = new double[2][1 << 16];
+    double[][] block;
 
     @Setup(Level.Trial)
     public void write() throws IOException {
+        block = new double[2][blockFrames];
         int bytes = bits / 8;
         int blockAlign = 2 * bytes;
         int data = DATA_BYTES / blockAlign * blockAlign;
