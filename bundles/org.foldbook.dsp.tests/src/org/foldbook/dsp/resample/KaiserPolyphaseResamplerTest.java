@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Random;
 
+import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -33,6 +34,17 @@ class KaiserPolyphaseResamplerTest {
         assertEquals(1001, KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(1, 50)).tapsPerOutput());
         int t = KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(765, 1000)).tapsPerOutput();
         assertTrue(t >= 26 && t <= 28, "taps " + t);
+    }
+
+    @Test
+    @DisplayName("1/1 is a plain copy, as scipy.signal.resample_poly returns for up == down")
+    void unitRatioIsCopy() {
+        double[] x = ReferenceVectors.column("input.txt");
+        KaiserPolyphaseResampler r = KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(7, 7));
+        assertArrayEquals(x, r.apply(x), 0.0);
+        double[] part = new double[10];
+        r.evaluate(x, 5, part, 0, 10);
+        assertArrayEquals(java.util.Arrays.copyOfRange(x, 5, 15), part, 0.0);
     }
 
     @Test

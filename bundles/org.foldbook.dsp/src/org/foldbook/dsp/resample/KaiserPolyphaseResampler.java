@@ -22,16 +22,19 @@ import org.foldbook.dsp.Check;
 public final class KaiserPolyphaseResampler implements Resampler {
 
     private final RateRatio ratio;
-    private final PolyphaseKernel kernel;
+    private final PolyphaseKernel kernel;   // null for 1/1 (a copy)
 
     private KaiserPolyphaseResampler(RateRatio ratio, PolyphaseKernel kernel) {
         this.ratio = ratio;
         this.kernel = kernel;
     }
 
-    /** scipy.signal.resample_poly(x, up, down)'s default filter for {@code ratio}. */
+    /** scipy.signal.resample_poly(x, up, down)'s default filter for {@code ratio}; 1/1 is a plain copy, as there. */
     public static KaiserPolyphaseResampler resamplePolyDefaults(RateRatio ratio) {
         Objects.requireNonNull(ratio, "ratio");
+        if (ratio.up() == 1 && ratio.down() == 1) {
+            return new KaiserPolyphaseResampler(ratio, null);
+        }
         int up = BareSampler.phaseCount(ratio);
         int down = BareSampler.intDown(ratio);
         long r = Math.max(up, down);
@@ -86,7 +89,7 @@ public final class KaiserPolyphaseResampler implements Resampler {
 
     /** Multiply-adds per output sample. */
     public int tapsPerOutput() {
-        return kernel.taps();
+        return kernel == null ? 1 : kernel.taps();
     }
 
     @Override
@@ -96,6 +99,9 @@ public final class KaiserPolyphaseResampler implements Resampler {
         if (m > Integer.MAX_VALUE - 8) {
             throw new IllegalArgumentException("samples: " + samples.length + " inputs give " + m
                     + " outputs, too many for one array; use start(sink)");
+        }
+        if (kernel == null) {
+            return samples.clone();
         }
         double[] out = new double[(int) m];
         kernel.evaluate(samples, samples.length, 0, out, 0, out.length);
@@ -115,11 +121,15 @@ public final class KaiserPolyphaseResampler implements Resampler {
             throw new IllegalArgumentException("output range " + first + " + " + count + " outside [0, " + total + ")");
         }
         Check.slice("out", out.length, outOffset, count);
-        kernel.evaluate(samples, samples.length, first, out, outOffset, count);
+        if (kernel == null) {
+            System.arraycopy(samples, (int) first, out, outOffset, count);
+        } else {
+            kernel.evaluate(samples, samples.length, first, out, outOffset, count);
+        }
     }
 
     @Override
     public ResampleRun start(SampleSink sink) {
-        return new PolyphaseRun(kernel, sink);
+        return kernel == null ? new PickRun(1, sink) : new PolyphaseRun(kernel, sink);
     }
 }
