@@ -101,6 +101,22 @@ def welch_cases():
                                                     kw["scaling"]))
 
 
+def periodogram_cases():
+    # Amplitude spectra: scipy.signal.periodogram(scaling='spectrum') is the squared rms amplitude per bin.
+    with open(os.path.join(OUT, "periodogram-cases.txt"), "w") as idx:
+        header(idx, ["one case a line: name length fs window detrend; input in periodogram-NAME-input.txt"])
+        cases = [("hann-even", 1024, 2000.0, "hann", "constant"), ("flattop-odd", 1001, 3000.0, "flattop", False),
+                 ("hamming-odd", 999, 1.0, "hamming", "linear")]
+        for name, n, fs, win, det in cases:
+            x = signal(n, fs, [(fs * 0.1234, 1.5, 0.2), (fs * 0.31, 0.05, 1.1)], 0.01, n, 0.5, 0.3)
+            write_column("periodogram-%s-input.txt" % name, x, ["input: two tones, noise 0.01, seed %d" % n])
+            f, p = ss.periodogram(x, fs=fs, window=win, detrend=det, scaling="spectrum")
+            write_columns("periodogram-%s.txt" % name, [f, p],
+                          ["scipy.signal.periodogram(x, fs=%r, window=%r, detrend=%r, scaling='spectrum'): f Pxx"
+                           % (fs, win, det)])
+            idx.write("%s %d %r %s %s\n" % (name, n, fs, win, "none" if det is False else det))
+
+
 def peak_cases():
     # Peak finder: the peer-like PSD in dB, and a hand-shaped sequence with plateaus and equal peaks.
     x = signal(20000, 100000.0, [(1000.0, 1.0, 0.1), (4700.0, 0.5, 0.7), (13300.0, 0.3, 1.3),
@@ -133,6 +149,7 @@ def main():
     os.makedirs(OUT, exist_ok=True)
     windows()
     welch_cases()
+    periodogram_cases()
     peak_cases()
     print("wrote", len(os.listdir(OUT)), "files to", OUT, file=sys.stderr)
 
