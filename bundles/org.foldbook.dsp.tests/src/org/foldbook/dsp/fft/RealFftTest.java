@@ -154,6 +154,36 @@ class RealFftTest {
     }
 
     @Test
+    @DisplayName("configureThreads: split transforms equal one-thread ones; the library's threads are daemons")
+    void threadConfiguration() {
+        int before = org.visnow.jlargearrays.ConcurrencyUtils.getNumberOfThreads();
+        try {
+            int n = 1 << 16; // above the library's 8192-sample threshold for splitting
+            double[] x = randomSignal(n, 9);
+            RealFft fft = RealFft.of(n);
+            RealFft.configureThreads(1);
+            double[] one = new double[fft.bins()];
+            fft.powerInPlace(x.clone(), one);
+            RealFft.configureThreads(2);
+            double[] two = new double[fft.bins()];
+            fft.powerInPlace(x.clone(), two);
+            for (int k = 0; k < one.length; k++) {
+                assertEquals(one[k], two[k], 1e-12 * (one[k] + 1), "bin " + k);
+            }
+            boolean sawWorker = false;
+            for (Thread t : Thread.getAllStackTraces().keySet()) {
+                if (t.getName().startsWith("foldbook-fft-")) {
+                    sawWorker = true;
+                    assertTrue(t.isDaemon(), t.getName());
+                }
+            }
+            assertTrue(sawWorker, "a split transform ran on the configured pool");
+        } finally {
+            RealFft.configureThreads(before); // leave the library as this JVM had it
+        }
+    }
+
+    @Test
     @DisplayName("one operator shared by threads gives the same result as on one thread")
     void sharedAcrossThreads() throws Exception {
         RealFft fft = RealFft.of(4096);
