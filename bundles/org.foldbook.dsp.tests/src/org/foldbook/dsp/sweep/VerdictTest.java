@@ -174,6 +174,42 @@ class VerdictTest {
     }
 
     @Test
+    @DisplayName("classifier rules on given peak lists: fold formula match, unexplained, suppressed, level check")
+    void classifierRules() {
+        double df0 = 10;
+        List<SourcePeak> src = List.of(new SourcePeak(0, 1000, -10, 0), new SourcePeak(1, 3000, -20, -10),
+                new SourcePeak(2, 7300, -30, -20));
+        VerdictClassifier c = new VerdictClassifier(src, df0, 1.5);
+        RateStep step = RateLadder.ofRates(20_000, new double[] {5000}, 10).get(0);
+        double df = 1.0;   // bin width at the rate: bin power = level + 0 dB
+        // 1000 Hz stays; 3000 Hz at 5 kS/s folds to 2000 Hz; 7300 Hz to 2300 Hz (fold formula, O&S ch. 4)
+        List<org.foldbook.dsp.peaks.SpectralPeak> seen = List.of(peak(1000.4, 0), peak(1234, -50), peak(2000.2, -12));
+        RateResult r = c.classify(step, 1000, df, seen);
+        assertEquals(Verdict.SURVIVES, r.fate(0).verdict());
+        assertEquals(Verdict.FOLDS, r.fate(1).verdict());
+        assertEquals(2000, r.fate(1).apparentFrequency(), 1e-9);
+        assertEquals(-2.0, r.fate(1).gainDb(), 1e-9, "seen bin power -12 dB vs source bin power -10 dB");
+        assertEquals(Verdict.SUPPRESSED, r.fate(2).verdict());
+        assertEquals(2300, r.fate(2).apparentFrequency(), 1e-9);
+        assertEquals(Verdict.UNEXPLAINED, r.observed().get(1).verdict());
+        assertEquals(-1, r.observed().get(1).sourcePeak());
+        // beyond the match radius (0.05 source bin + 1.5 bins = 2 Hz) it is no longer the source peak
+        RateResult far = c.classify(step, 1000, df, List.of(peak(1002.5, 0)));
+        assertEquals(Verdict.SUPPRESSED, far.fate(0).verdict());
+        assertEquals(Verdict.UNEXPLAINED, far.observed().get(0).verdict());
+        // through an 8th-order Butterworth at 100 Hz, 1000 Hz is predicted 160 dB down (|H|^2 = 1/(1+10^16)): a
+        // seen peak at the source's full level is far too strong to be it (more than 6 dB above the prediction)
+        Resampling deep = Resampling.modelledFilter(AnalogLowPass.butterworth(8, 100));
+        assertTrue(deep.powerGain(1000, step) < 1e-16);
+        assertEquals(Verdict.SUPPRESSED, c.classify(step, 1000, df, seen, deep).fate(0).verdict());
+        assertEquals(Verdict.SURVIVES, c.classify(step, 1000, df, List.of(peak(1000.4, -175)), deep).fate(0).verdict());
+    }
+
+    static org.foldbook.dsp.peaks.SpectralPeak peak(double f, double levelDb) {
+        return new org.foldbook.dsp.peaks.SpectralPeak((int) f, f, levelDb, levelDb, 20, Double.NaN);
+    }
+
+    @Test
     @DisplayName("progress reports every rate; cancel stops the sweep with CancellationException")
     void progressAndCancel() {
         double[] x = Tones.of(1 << 15, 1000, new double[] {50}, new double[] {1}, 1e-3, 5);
