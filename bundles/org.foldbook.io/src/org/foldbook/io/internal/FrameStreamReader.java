@@ -77,8 +77,8 @@ public final class FrameStreamReader implements RecordingReader {
             }
             int n = Math.min(want - done, input.available() / frameBytes);
             long bad = perChannel != null
-                    ? codec.decode(input.array(), input.index(), n, perChannel, offset + done)
-                    : codec.decodeInterleaved(input.array(), input.index(), n, interleaved, offset + done * channels);
+                    ? codec.decode(input.buffer(), input.index(), n, perChannel, offset + done)
+                    : codec.decodeInterleaved(input.buffer(), input.index(), n, interleaved, offset + done * channels);
             if (bad >= 0) {
                 long at = input.position() + bad * codec.type().bytes();
                 throw RecordingFormatException.atByte(info.file(), at, "sample " + (framePosition + done

@@ -2,12 +2,13 @@ package org.foldbook.io.internal;
 
 import java.lang.invoke.MethodHandles;
 import java.lang.invoke.VarHandle;
+import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
 
 import org.foldbook.io.SampleType;
 
 /**
- * Turns stored samples into doubles: {@code value = stored * scale[c] + offset[c]}, for interleaved
+ * Turns stored samples into doubles (read from a heap or direct buffer at absolute byte indices): {@code value = stored * scale[c] + offset[c]}, for interleaved
  * frames of {@code channels} samples. Floating-point samples that are NaN or infinite are reported
  * (the recording formats read here have no use for them), integer samples never are.
  */
@@ -24,7 +25,7 @@ public final class SampleCodec {
     private static final VarHandle F64_BE = view(double[].class, ByteOrder.BIG_ENDIAN);
 
     private static VarHandle view(Class<?> arrayType, ByteOrder order) {
-        return MethodHandles.byteArrayViewVarHandle(arrayType, order);
+        return MethodHandles.byteBufferViewVarHandle(arrayType, order);
     }
 
     private final SampleType type;
@@ -62,19 +63,19 @@ public final class SampleCodec {
     }
 
     /** Stored value of the sample at {@code p}, before scale and offset. */
-    double raw(byte[] src, int p) {
+    double raw(ByteBuffer src, int p) {
         switch (type) {
         case UINT8:
-            return src[p] & 0xFF;
+            return src.get(p) & 0xFF;
         case INT8:
-            return src[p];
+            return src.get(p);
         case INT16:
             return little ? (short) S16_LE.get(src, p) : (short) S16_BE.get(src, p);
         case UINT16:
             return (little ? (short) S16_LE.get(src, p) : (short) S16_BE.get(src, p)) & 0xFFFF;
         case INT24:
-            return little ? ((src[p + 2] << 16) | ((src[p + 1] & 0xFF) << 8) | (src[p] & 0xFF))
-                    : ((src[p] << 16) | ((src[p + 1] & 0xFF) << 8) | (src[p + 2] & 0xFF));
+            return little ? ((src.get(p + 2) << 16) | ((src.get(p + 1) & 0xFF) << 8) | (src.get(p) & 0xFF))
+                    : ((src.get(p) << 16) | ((src.get(p + 1) & 0xFF) << 8) | (src.get(p + 2) & 0xFF));
         case INT32:
             return little ? (int) S32_LE.get(src, p) : (int) S32_BE.get(src, p);
         case UINT32:
@@ -91,11 +92,11 @@ public final class SampleCodec {
     }
 
     /**
-     * Decodes {@code frames} interleaved frames starting at {@code src[p]} into one array per channel.
+     * Decodes {@code frames} interleaved frames starting at {@code src.get(p)} into one array per channel.
      *
      * @return -1, or the sample index (frame * channels + channel) of the first NaN/infinite value
      */
-    public long decode(byte[] src, int p, int frames, double[][] dest, int destOffset) {
+    public long decode(ByteBuffer src, int p, int frames, double[][] dest, int destOffset) {
         switch (type) {
         case INT16:
             return little ? decode16le(src, p, frames, dest, destOffset) : generic(src, p, frames, dest, destOffset);
@@ -108,7 +109,7 @@ public final class SampleCodec {
 
     // The two layouts that dominate lab WAV files get their own tight loops: frame-major, so the input
     // block is read once front to back, with mono and stereo unrolled over channels.
-    private long decode16le(byte[] src, int p, int frames, double[][] dest, int off) {
+    private long decode16le(ByteBuffer src, int p, int frames, double[][] dest, int off) {
         if (channels == 1) {
             double[] d0 = dest[0];
             double s0 = scale[0];
@@ -138,11 +139,11 @@ public final class SampleCodec {
     }
 
     /** Little-endian 24-bit: the low 16 bits as one unsigned short, the top byte sign-extends. */
-    private static int s24le(byte[] src, int q) {
-        return (src[q + 2] << 16) | ((short) S16_LE.get(src, q) & 0xFFFF);
+    private static int s24le(ByteBuffer src, int q) {
+        return (src.get(q + 2) << 16) | ((short) S16_LE.get(src, q) & 0xFFFF);
     }
 
-    private long decode24le(byte[] src, int p, int frames, double[][] dest, int off) {
+    private long decode24le(ByteBuffer src, int p, int frames, double[][] dest, int off) {
         if (channels == 1) {
             double[] d0 = dest[0];
             double s0 = scale[0];
@@ -171,7 +172,7 @@ public final class SampleCodec {
         return -1;
     }
 
-    private long generic(byte[] src, int p, int frames, double[][] dest, int off) {
+    private long generic(ByteBuffer src, int p, int frames, double[][] dest, int off) {
         int bytes = type.bytes();
         boolean checkFinite = type.isFloatingPoint();
         for (int f = 0; f < frames; f++) {
@@ -187,7 +188,7 @@ public final class SampleCodec {
     }
 
     /** As {@link #decode} but into one interleaved array. */
-    public long decodeInterleaved(byte[] src, int p, int frames, double[] dest, int off) {
+    public long decodeInterleaved(ByteBuffer src, int p, int frames, double[] dest, int off) {
         int bytes = type.bytes();
         boolean checkFinite = type.isFloatingPoint();
         int n = frames * channels;

@@ -18,10 +18,10 @@ import org.foldbook.io.Sha256;
 public final class SequentialInput implements Closeable {
     private final Path file;
     private final FileChannel channel;
-    private final byte[] array;
-    private final ByteBuffer buffer;
+    private final ByteBuffer buffer; // direct: the channel reads into it without an extra copy
+    private final int capacity;
     private final MessageDigest digest;
-    private long arrayFilePosition;
+    private long bufferFilePosition;
     private int pos;
     private int limit;
     private boolean atEof;
@@ -30,8 +30,8 @@ public final class SequentialInput implements Closeable {
     public SequentialInput(Path file, FileChannel channel, int bufferBytes, boolean sha256) throws IOException {
         this.file = file;
         this.channel = channel;
-        this.array = new byte[bufferBytes];
-        this.buffer = ByteBuffer.wrap(array);
+        this.buffer = ByteBuffer.allocateDirect(bufferBytes);
+        this.capacity = bufferBytes;
         this.digest = sha256 ? Sha256.newDigest() : null;
         channel.position(0);
     }
@@ -44,11 +44,12 @@ public final class SequentialInput implements Closeable {
         return channel;
     }
 
-    public byte[] array() {
-        return array;
+    /** The buffer; bytes {@code index() .. index() + available()} are unread. Do not move its position. */
+    public ByteBuffer buffer() {
+        return buffer;
     }
 
-    /** Index in {@link #array()} of the next unread byte. */
+    /** Index in {@link #buffer()} of the next unread byte. */
     public int index() {
         return pos;
     }
@@ -59,7 +60,7 @@ public final class SequentialInput implements Closeable {
 
     /** File offset of the next unread byte. */
     public long position() {
-        return arrayFilePosition + pos;
+        return bufferFilePosition + pos;
     }
 
     public void advance(int bytes) {
@@ -75,25 +76,26 @@ public final class SequentialInput implements Closeable {
      * @return false if the file ends first (whatever could be read stays available)
      */
     public boolean fill(int n) throws IOException {
-        if (n > array.length) {
-            throw new IllegalArgumentException("n: " + n + " exceeds the buffer of " + array.length + " bytes");
+        if (n > capacity) {
+            throw new IllegalArgumentException("n: " + n + " exceeds the buffer of " + capacity + " bytes");
         }
         if (limit - pos >= n) {
             return true;
         }
         int remaining = limit - pos;
-        System.arraycopy(array, pos, array, 0, remaining);
-        arrayFilePosition += pos;
+        buffer.limit(limit).position(pos);
+        buffer.compact();
+        bufferFilePosition += pos;
         pos = 0;
         limit = remaining;
         while (limit < n && !atEof) {
-            buffer.limit(array.length).position(limit);
+            buffer.limit(capacity).position(limit);
             int read = channel.read(buffer);
             if (read < 0) {
                 atEof = true;
             } else {
                 if (digest != null) {
-                    digest.update(array, limit, read);
+                    digest.update(buffer.duplicate().limit(limit + read).position(limit));
                 }
                 limit += read;
             }

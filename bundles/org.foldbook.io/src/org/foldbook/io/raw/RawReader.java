@@ -158,7 +158,7 @@ public final class RawReader {
                     }
                     one[0] = tmp != null ? tmp : channels[c];
                     int o = tmp != null ? 0 : destOffset + done;
-                    long bad = codec.decode(bytes, 0, n, one, o);
+                    long bad = codec.decode(b, 0, n, one, o);
                     if (bad >= 0) {
                         throw RecordingFormatException.atByte(info.file(), at + bad * sample, "sample "
                                 + (framePosition + done + bad) + " of channel " + (c + 1) + " is NaN or infinite");
