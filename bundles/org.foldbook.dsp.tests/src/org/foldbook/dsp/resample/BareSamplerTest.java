@@ -187,6 +187,62 @@ class BareSamplerTest {
     }
 
     @Test
+    @DisplayName("one sampler shared by two threads gives each the single-threaded result (immutable operator)")
+    void sharedAcrossThreads() throws Exception {
+        Random rnd = new Random(23);
+        double[] x = new double[100_000];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = rnd.nextGaussian();   // synthetic input
+        }
+        BareSampler s = BareSampler.of(RateRatio.of(521, 542));
+        double[] want = s.apply(x);
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(2);
+        try {
+            List<java.util.concurrent.Future<double[]>> got = new java.util.ArrayList<>();
+            for (int t = 0; t < 4; t++) {
+                got.add(pool.submit(() -> s.apply(x)));
+            }
+            for (var f : got) {
+                assertArrayEquals(want, f.get(), 0.0);
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    @Test
+    @DisplayName("10^7 samples streamed in blocks: ceil(N·up/down) outputs, tone still exact at the far end")
+    void longStream() {
+        RateRatio q = RateRatio.of(13, 50);
+        long n = 10_000_000L;
+        double f = 0.05;                                   // cycles per input sample, synthetic tone
+        long[] count = {0};
+        double[] worst = {0};
+        ResampleRun run = BareSampler.of(q).start((b, o, l) -> {
+            for (int i = 0; i < l; i++) {
+                long m = count[0] + i;
+                double t = m * 50.0 / 13.0;
+                if (t > 40 && t < n - 40) {
+                    worst[0] = Math.max(worst[0], Math.abs(b[o + i] - Math.sin(2 * Math.PI * f * t)));
+                }
+            }
+            count[0] += l;
+        });
+        double[] block = new double[8192];
+        for (long start = 0; start < n; start += block.length) {
+            int c = (int) Math.min(block.length, n - start);
+            for (int i = 0; i < c; i++) {
+                block[i] = Math.sin(2 * Math.PI * f * (start + i));
+            }
+            run.push(block, 0, c);
+        }
+        run.finish();
+        assertEquals(q.outputLength(n), count[0]);
+        // the bound, -100 dB re amplitude 1, here as a peak error
+        assertTrue(worst[0] < 1e-5, "peak error " + worst[0]);
+    }
+
+    @Test
     @DisplayName("short inputs (fewer samples than taps) still give ceil(N·up/down) outputs, as the formula")
     void shortInput() {
         double[] x = {1.0, -2.0, 0.5};
