@@ -1,0 +1,251 @@
+package org.foldbook.ui.notebook;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assertions.fail;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.BooleanSupplier;
+
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Event;
+import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Shell;
+import org.eclipse.swt.widgets.Table;
+import org.eclipse.swt.widgets.TableItem;
+import org.eclipse.swt.widgets.Text;
+import org.eclipse.swt.widgets.Tree;
+import org.eclipse.swt.widgets.TreeItem;
+import org.eclipse.swtchart.Chart;
+import org.foldbook.model.Channel;
+import org.foldbook.model.Experiment;
+import org.foldbook.model.SignalChain;
+import org.foldbook.model.demo.GearboxDemo;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The notebook part in a real SWT shell on the demo notebook (needs a display; the test command
+ * provides Xvfb). Check values are worked out by hand: Nyquist = fs/2 (sampling theorem); the
+ * 4th-order Butterworth at 10 kHz attenuates 10·log10(1 + (12.8/10)^8) = 9.14 dB at 12.8 kHz
+ * (Butterworth magnitude, any filter handbook); a 0.8 ms exposure is a box-car whose magnitude at
+ * 500 Hz is sin(0.4π)/(0.4π) = 0.7568, i.e. 2.42 dB (rectangular-window transform, common practice).
+ */
+class NotebookPartTest {
+
+    private static final long WAIT_NANOS = 120_000_000_000L;
+
+    @TempDir
+    Path folder;
+
+    private Display display;
+    private Shell shell;
+    private NotebookPart part;
+    private NotebookDocument document;
+
+    @BeforeEach
+    void open() throws IOException {
+        display = Display.getDefault();
+        shell = new Shell(display);
+        shell.setSize(1300, 850);
+        shell.setLayout(new org.eclipse.swt.layout.FillLayout());
+        document = NotebookDocument.load(GearboxDemo.write(folder));
+        part = new NotebookPart();
+        Composite host = new Composite(shell, SWT.NONE);
+        part.createControls(host);
+        part.show(document);
+        shell.layout(true, true);
+    }
+
+    @AfterEach
+    void close() {
+        part.dispose();
+        shell.dispose();
+        document.dispose();
+    }
+
+    @Test
+    @DisplayName("the tree shows inventory, rigs with chains, experiments with channels")
+    void treeContent() {
+        Tree tree = find(shell, Tree.class);
+        assertEquals(1, tree.getItemCount());
+        TreeItem root = tree.getItem(0);
+        assertEquals(document.notebook().getTitle(), root.getText(0));
+        assertEquals(List.of("Inventory (9)", "Rigs (1)", "Experiments (2)"), texts(root.getItems()));
+        TreeItem rig = root.getItem(1).getItem(0);
+        assertEquals("gearbox stand GB-2", rig.getText(0));
+        assertEquals(List.of("housing Z, filtered", "bearing Z, filter bypassed", "sound at 0.5 m", "shaft mark camera"),
+                texts(rig.getItems()));
+        // Nyquist of the vibration chains: 25.6 kS/s / 2 = 12.8 kHz
+        assertEquals("Nyquist 12.8 kHz, 4 stages", rig.getItem(0).getText(1));
+        TreeItem run = root.getItem(2).getItem(0);
+        assertEquals(List.of("housing Z", "bearing Z", "sound 0.5 m", "data/vibration-run1.wav", "data/sound-run1.wav"),
+                texts(run.getItems()));
+    }
+
+    @Test
+    @DisplayName("a channel's figures: 25.6 kS/s, Nyquist 12.8 kHz, Butterworth 4 @ 10 kHz gives 9.1 dB at Nyquist")
+    void channelFigures() {
+        part.select(channel("housing Z"));
+        Map<String, String> rows = figures();
+        assertEquals("25.6 kS/s", rows.get("Sample rate"));
+        assertEquals("12.8 kHz", rows.get("Nyquist frequency"));
+        assertEquals("9.1 dB attenuation", rows.get("Analog filter at Nyquist"));
+        assertEquals("32 kHz (sensor band or resonance)", rows.get("Front end passes up to"));
+        assertTrue(rows.containsKey("Alias-free band") && rows.containsKey("Protection margin"), rows.toString());
+        // 24 bits, full-scale tone below the ideal quantisation noise: 20·log10(2^24·√1.5) = 146.26 dB
+        // (the ideal quantiser's 6.02·N + 1.76 dB, common practice)
+        assertEquals("146.3 dB", rows.get("Needed (24-bit, full-scale tone)"));
+        Chart chart = find(shell, Chart.class);
+        // response, the band that folds, the Nyquist line, the needed attenuation
+        assertEquals(4, chart.getSeriesSet().getSeries().length);
+
+        part.select(channel("bearing Z"));
+        rows = figures();
+        assertEquals("none in the chain", rows.get("Analog filter at Nyquist"));
+        assertEquals("12.8 kHz – 32 kHz lands in 0 Hz – 12.8 kHz", rows.get("Folds unprotected"));
+
+        part.select(channel("mark brightness"));
+        rows = figures();
+        assertEquals("1000 frames/s", rows.get("Frame rate"));
+        assertEquals("500 Hz", rows.get("Nyquist frequency"));
+        assertEquals("1 ms", rows.get("Frame period"));
+        assertEquals("0.8 ms (80 % of the frame period)", rows.get("Exposure"));
+        assertEquals("2.4 dB attenuation", rows.get("Exposure smear at Nyquist"));
+    }
+
+    @Test
+    @DisplayName("the findings list the bypassed filter; double-click selects its chain")
+    void findingsListed() {
+        Table findings = findingsTable();
+        waitFor(() -> findings.getItemCount() > 0 || statusText().startsWith("No findings"), "validation job");
+        assertEquals(1, findings.getItemCount(), statusText());
+        TableItem item = findings.getItem(0);
+        assertEquals("Warning", item.getText(0));
+        assertEquals("bearing Z, filter bypassed", item.getText(1));
+        assertTrue(item.getText(2).startsWith("no anti-alias filter"), item.getText(2));
+        assertTrue(statusText().startsWith("0 error(s), 1 warning(s)"), statusText());
+
+        findings.setSelection(0);
+        findings.notifyListeners(SWT.DefaultSelection, new Event());
+        SignalChain shown = part.shownChain();
+        assertNotNull(shown);
+        assertEquals("CH-BZ", shown.getId());
+    }
+
+    @Test
+    @DisplayName("changing the rate is a command: figures follow, undo and redo restore, the notebook is dirty")
+    void editUndoRedo() {
+        part.select(channel("housing Z"));
+        Text rate = findAll(shell, Text.class).get(0);
+        rate.setText("51200");
+        rate.notifyListeners(SWT.DefaultSelection, new Event());
+        assertTrue(document.isDirty());
+        assertEquals("25.6 kHz", figures().get("Nyquist frequency")); // 51.2 kS/s / 2
+        document.undo();
+        assertEquals("12.8 kHz", figures().get("Nyquist frequency"));
+        assertFalse(document.isDirty());
+        document.redo();
+        assertEquals("25.6 kHz", figures().get("Nyquist frequency"));
+
+        rate.setText("fast");
+        rate.notifyListeners(SWT.DefaultSelection, new Event());
+        assertTrue(findAll(shell, Label.class).stream().anyMatch(l -> l.getText().contains("not a number: 'fast'")));
+        rate.setText("100000"); // above the digitizer's 51.2 kS/s
+        rate.notifyListeners(SWT.DefaultSelection, new Event());
+        assertTrue(findAll(shell, Label.class).stream().anyMatch(l -> l.getText().contains("above the digitizer's maximum")));
+        assertEquals("25.6 kHz", figures().get("Nyquist frequency"));
+    }
+
+    private Channel channel(String name) {
+        for (Experiment e : document.notebook().getExperiments()) {
+            for (Channel c : e.getChannels()) {
+                if (name.equals(c.getName())) {
+                    return c;
+                }
+            }
+        }
+        return fail("no channel " + name);
+    }
+
+    /** The figures table: figure → value. */
+    private Map<String, String> figures() {
+        Table table = findAll(shell, Table.class).get(0);
+        Map<String, String> rows = new LinkedHashMap<>();
+        for (TableItem item : table.getItems()) {
+            rows.put(item.getText(0), item.getText(1));
+        }
+        return rows;
+    }
+
+    private Table findingsTable() {
+        List<Table> tables = findAll(shell, Table.class);
+        return tables.get(tables.size() - 1);
+    }
+
+    private String statusText() {
+        return findAll(shell, Label.class).stream().map(Label::getText)
+                .filter(t -> t.startsWith("No findings") || t.contains("error(s)") || t.startsWith("Checking"))
+                .findFirst().orElse("");
+    }
+
+    private void waitFor(BooleanSupplier condition, String what) {
+        long end = System.nanoTime() + WAIT_NANOS;
+        while (!condition.getAsBoolean()) {
+            if (System.nanoTime() > end) {
+                fail(what + " did not finish");
+            }
+            if (!display.readAndDispatch()) {
+                try {
+                    Thread.sleep(10);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    fail("interrupted");
+                }
+            }
+        }
+    }
+
+    private static List<String> texts(TreeItem[] items) {
+        List<String> out = new ArrayList<>();
+        for (TreeItem i : items) {
+            out.add(i.getText(0));
+        }
+        return out;
+    }
+
+    private static <T extends Control> T find(Control root, Class<T> type) {
+        List<T> all = findAll(root, type);
+        return all.isEmpty() ? fail("no " + type.getSimpleName()) : all.get(0);
+    }
+
+    private static <T extends Control> List<T> findAll(Control root, Class<T> type) {
+        List<T> found = new ArrayList<>();
+        collect(root, type, found);
+        return found;
+    }
+
+    private static <T extends Control> void collect(Control c, Class<T> type, List<T> found) {
+        if (type.isInstance(c)) {
+            found.add(type.cast(c));
+        }
+        if (c instanceof Composite comp && !(c instanceof Chart)) {
+            for (Control child : comp.getChildren()) {
+                collect(child, type, found);
+            }
+        }
+    }
+}

@@ -1,0 +1,188 @@
+package org.foldbook.ui.notebook;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.StringJoiner;
+
+import org.foldbook.dsp.filter.FrequencyResponse;
+import org.foldbook.model.Amplifier;
+import org.foldbook.model.AntiAliasFilter;
+import org.foldbook.model.Camera;
+import org.foldbook.model.Device;
+import org.foldbook.model.Digitizer;
+import org.foldbook.model.FilterFamily;
+import org.foldbook.model.Sensor;
+import org.foldbook.model.SignalChain;
+import org.foldbook.model.Stage;
+import org.foldbook.model.derived.ChainFigures;
+import org.foldbook.model.derived.ChainFigures.Band;
+
+/**
+ * The figures the details pane shows for a chain, as text rows, all computed on demand from the
+ * model's {@link ChainFigures} (which uses {@code org.foldbook.dsp}); nothing here is stored. Kept
+ * apart from the widgets so that the wording and number formats are tested without a display.
+ */
+public final class ChainSummary {
+
+    /** One line of the figures table. */
+    public record Row(String figure, String value) {
+    }
+
+    private ChainSummary() {
+    }
+
+    /** The stages as one line, e.g. "ACC-H1 → CAMP-2 ×10 → LP-A Butterworth 4 @ 10 kHz → DAQ-8 @ 25.6 kS/s". */
+    public static String path(SignalChain chain) {
+        StringJoiner line = new StringJoiner("  →  ");
+        for (Stage stage : chain.getStages()) {
+            line.add(stageText(stage));
+        }
+        return line.length() == 0 ? "(no stages)" : line.toString();
+    }
+
+    /** A stage's device and its settings, short. */
+    public static String stageText(Stage stage) {
+        Device device = stage.getDevice();
+        if (device == null) {
+            return "(no device)";
+        }
+        String name = device.getId() != null ? device.getId() : String.valueOf(device.getModelName());
+        if (device instanceof Amplifier) {
+            return name + (stage.getGain() != null ? " ×" + number(stage.getGain()) : "");
+        }
+        if (device instanceof AntiAliasFilter filter) {
+            if (filter.getFamily() == FilterFamily.NONE) {
+                return name + " (no filtering)";
+            }
+            double cutoff = stage.getCutoffHz() != null ? stage.getCutoffHz() : filter.getCutoffHz();
+            return name + " " + familyText(filter) + " @ " + hz(cutoff);
+        }
+        if (device instanceof Digitizer digitizer) {
+            Double rate = stage.getRateHz() != null ? stage.getRateHz() : digitizer.getMaxRateHz();
+            return name + " " + digitizer.getResolutionBits() + "-bit @ " + rate(rate)
+                    + (digitizer.isDigitalFilter() ? " (built-in filter)" : "");
+        }
+        if (device instanceof Camera camera) {
+            Double rate = stage.getRateHz() != null ? stage.getRateHz()
+                    : camera.getFrameRatesHz().isEmpty() ? null : camera.getFrameRatesHz().get(0);
+            return name + " @ " + (rate == null ? "?" : number(rate) + " frames/s");
+        }
+        return name;
+    }
+
+    /** The figures of the chain, in reading order. */
+    public static List<Row> rows(SignalChain chain) {
+        List<Row> rows = new ArrayList<>();
+        double rate = ChainFigures.samplingRateHz(chain);
+        Stage sampler = ChainFigures.samplingStage(chain);
+        if (sampler == null || Double.isNaN(rate)) {
+            rows.add(new Row("Sampling", "no digitizer or camera in this chain"));
+            return rows;
+        }
+        boolean camera = sampler.getDevice() instanceof Camera;
+        rows.add(new Row(camera ? "Frame rate" : "Sample rate", camera ? number(rate) + " frames/s" : rate(rate)));
+        rows.add(new Row("Nyquist frequency", hz(rate / 2)));
+        double upper = ChainFigures.frontEndUpperHz(chain);
+        if (!Double.isNaN(upper)) {
+            rows.add(new Row("Front end passes up to", hz(upper) + " (sensor band or resonance)"));
+        }
+        Stage filter = ChainFigures.filterStage(chain);
+        if (filter != null) {
+            Optional<Double> att = ChainFigures.filterAttenuationAtNyquistDb(chain);
+            rows.add(new Row("Analog filter at Nyquist", att.map(a -> db(a) + " attenuation")
+                    .orElse("filter not fully described")));
+        } else {
+            rows.add(new Row("Analog filter at Nyquist", "none in the chain"));
+        }
+        if (camera) {
+            cameraRows(chain, sampler, rate, rows);
+            return rows;
+        }
+        Optional<org.foldbook.dsp.digitizer.ChainFigures> figures = ChainFigures.figures(chain);
+        if (figures.isPresent()) {
+            org.foldbook.dsp.digitizer.ChainFigures f = figures.get();
+            rows.add(new Row("Whole chain at Nyquist", db(f.attenuationAtNyquistDb()) + " attenuation"));
+            rows.add(new Row("Needed (" + f.bits() + "-bit, full-scale tone)", db(f.requiredAttenuationDb())));
+            String band = hz(f.aliasFreeBandHz());
+            if (!Double.isNaN(f.limitingSourceHz())) {
+                band += " (limited by content at " + hz(f.limitingSourceHz()) + ")";
+            }
+            rows.add(new Row("Alias-free band", "0 – " + band));
+            rows.add(new Row("Protection margin", Double.isInfinite(f.marginDb()) ? "nothing above Nyquist reaches the digitizer"
+                    : signedDb(f.marginDb()) + (f.marginDb() >= 0 ? " (protected)" : " (short of the need)")));
+        }
+        if (filter == null && !ChainFigures.hasBuiltInDigitalFilter(chain)) {
+            Optional<Band> folded = ChainFigures.foldedBandHz(upper, rate);
+            rows.add(new Row("Folds unprotected", folded.map(b -> hz(rate / 2) + " – " + hz(upper) + " lands in "
+                    + hz(b.lowHz()) + " – " + hz(b.highHz())).orElse("nothing")));
+        }
+        return rows;
+    }
+
+    private static void cameraRows(SignalChain chain, Stage sampler, double rate, List<Row> rows) {
+        Camera camera = (Camera) sampler.getDevice();
+        Double exposure = sampler.getExposureS() != null ? sampler.getExposureS() : camera.getExposureS();
+        double period = 1.0 / rate;
+        rows.add(new Row("Frame period", ms(period)));
+        if (exposure == null) {
+            rows.add(new Row("Exposure", "not logged"));
+            return;
+        }
+        rows.add(new Row("Exposure", ms(exposure) + String.format(Locale.ROOT, " (%.0f %% of the frame period)",
+                100 * exposure / period)));
+        FrequencyResponse response = ChainFigures.chainResponse(chain);
+        rows.add(new Row("Exposure smear at Nyquist", db(response.attenuationDb(rate / 2)) + " attenuation"));
+    }
+
+    static String familyText(AntiAliasFilter filter) {
+        String family = switch (filter.getFamily()) {
+            case RC -> "RC";
+            case BUTTERWORTH -> "Butterworth";
+            case BESSEL -> "Bessel";
+            case CHEBYSHEV_I -> "Chebyshev I";
+            case ELLIPTIC -> "elliptic";
+            case NONE -> "none";
+            case UNKNOWN -> "unknown type";
+        };
+        return filter.getOrder() > 0 && filter.getFamily() != FilterFamily.RC ? family + " " + filter.getOrder() : family;
+    }
+
+    /** "12.8 kHz", "906.5 Hz". */
+    public static String hz(double value) {
+        if (Double.isNaN(value)) {
+            return "?";
+        }
+        return Math.abs(value) >= 1000 ? number(value / 1000) + " kHz" : number(value) + " Hz";
+    }
+
+    /** "25.6 kS/s". */
+    public static String rate(double value) {
+        return Math.abs(value) >= 1000 ? number(value / 1000) + " kS/s" : number(value) + " S/s";
+    }
+
+    static String db(double value) {
+        return Double.isInfinite(value) ? "∞ dB" : String.format(Locale.ROOT, "%.1f dB", value);
+    }
+
+    static String signedDb(double value) {
+        return String.format(Locale.ROOT, "%+.1f dB", value);
+    }
+
+    static String ms(double seconds) {
+        return number(seconds * 1000) + " ms";
+    }
+
+    /** Up to four significant digits, no trailing zeros: 12.8, 906.5, 0.8, 25.6. */
+    static String number(double value) {
+        String s = String.format(Locale.ROOT, "%.4g", value);
+        if (s.contains("e")) {
+            return s;
+        }
+        if (s.contains(".")) {
+            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        }
+        return s;
+    }
+}

@@ -1,0 +1,43 @@
+package org.foldbook.ui.notebook;
+
+import java.nio.file.Path;
+
+import org.eclipse.core.runtime.Platform;
+import org.eclipse.e4.ui.di.UISynchronize;
+import org.eclipse.e4.ui.model.application.MApplication;
+import org.eclipse.osgi.service.datalocation.Location;
+
+import jakarta.annotation.PostConstruct;
+
+/**
+ * Start-up (an addon of Application.e4xmi, so it runs before any part is drawn): puts the
+ * {@link CurrentNotebook} into the application context and opens a notebook in the background —
+ * the {@code .foldbook} file named on the command line, or else the demo notebook in
+ * {@code <workspace>/demo/}, written there on first start.
+ */
+public class NotebookStartupAddon {
+
+    /** Sub-folder of the workspace (the -data folder) holding the demo notebook. */
+    public static final String DEMO_FOLDER = "demo";
+
+    @PostConstruct
+    public void start(MApplication application, UISynchronize sync) {
+        CurrentNotebook current = new CurrentNotebook();
+        application.getContext().set(CurrentNotebook.class, current);
+        Path requested = StartupArguments.notebookPath(Platform.getApplicationArgs());
+        if (requested != null) {
+            NotebookOpening.open(requested, current, sync);
+        } else {
+            NotebookOpening.openDemo(workspace().resolve(DEMO_FOLDER), current, sync);
+        }
+    }
+
+    /** The instance location (-data), else ~/.foldbook/workspace. */
+    static Path workspace() {
+        Location location = Platform.getInstanceLocation();
+        if (location != null && location.getURL() != null && "file".equals(location.getURL().getProtocol())) {
+            return Path.of(location.getURL().getPath());
+        }
+        return Path.of(System.getProperty("user.home"), ".foldbook", "workspace");
+    }
+}
