@@ -197,6 +197,16 @@ class VerdictTest {
         RateResult far = c.classify(step, 1000, df, List.of(peak(1002.5, 0)));
         assertEquals(Verdict.SUPPRESSED, far.fate(0).verdict());
         assertEquals(Verdict.UNEXPLAINED, far.observed().get(0).verdict());
+        // 6001.8 Hz folds to 1001.8 Hz, 1.8 bins from the seen 1000 Hz peak: within the Hann main lobe's half
+        // width (2 bins, Harris 1978) of a stronger peak it cannot be resolved: MERGES; at 3 bins it is SUPPRESSED
+        VerdictClassifier two = new VerdictClassifier(List.of(new SourcePeak(0, 1000, -10, 0),
+                new SourcePeak(1, 6001.8, -20, -10)), df0, 1.5);
+        RateResult m = two.classify(step, 1000, df, List.of(peak(1000.0, 0)));
+        assertEquals(Verdict.MERGES, m.fate(1).verdict());
+        assertEquals(0, m.fate(1).mergedInto());
+        VerdictClassifier apart = new VerdictClassifier(List.of(new SourcePeak(0, 1000, -10, 0),
+                new SourcePeak(1, 6003, -20, -10)), df0, 1.5);
+        assertEquals(Verdict.SUPPRESSED, apart.classify(step, 1000, df, List.of(peak(1000.0, 0))).fate(1).verdict());
         // through an 8th-order Butterworth at 100 Hz, 1000 Hz is predicted 160 dB down (|H|^2 = 1/(1+10^16)): a
         // seen peak at the source's full level is far too strong to be it (more than 6 dB above the prediction)
         Resampling deep = Resampling.modelledFilter(AnalogLowPass.butterworth(8, 100));

@@ -15,7 +15,9 @@ import org.foldbook.dsp.peaks.SpectralPeak;
  * Oppenheim &amp; Schafer ch. 4). A peak seen within the match radius of it is that source peak arriving:
  * SURVIVES when k = 0, FOLDS otherwise. The match radius is {@value #SOURCE_TOLERANCE_BINS} of a source bin
  * (the source peak's sub-bin frequency estimate, with room for leakage of neighbours and noise) plus
- * {@code matchBins} bins at the rate (a seen peak is a bin centre). With a mode given, a seen peak more
+ * {@code matchBins} bins at the rate (a seen peak is a bin centre). A source peak with no free peak in
+ * its match radius but a stronger source peak's seen peak within {@value #MERGE_BINS} bins (the Hann main
+ * lobe's half width: not resolved) MERGES into it. With a mode given, a seen peak more
  * than {@value #LEVEL_EXCESS_DB} dB above the source peak's predicted level (its power times the mode's
  * |H(f)|²) is not taken for it: that is other content (often a noise peak of a short average) at the spot
  * where a strongly attenuated source peak would land. Source peaks are served
@@ -34,6 +36,8 @@ public final class VerdictClassifier {
     public static final double SOURCE_TOLERANCE_BINS = 0.05;
     /** How far above its predicted level (source power + 10·log10|H|²) a seen peak may be and still be the source peak. */
     public static final double LEVEL_EXCESS_DB = 6.0;
+    /** Two peaks closer than this many bins are not resolved: the Hann main lobe's half width (Harris 1978). */
+    public static final double MERGE_BINS = 2.0;
 
     private final List<SourcePeak> sources;
     private final double sourceBinWidth;
@@ -91,6 +95,7 @@ public final class VerdictClassifier {
         }
         double fs = step.effectiveRate();
         double radius = SOURCE_TOLERANCE_BINS * sourceBinWidth + matchBins * binWidth;
+        double mergeRadius = SOURCE_TOLERANCE_BINS * sourceBinWidth + Math.max(matchBins, MERGE_BINS) * binWidth;
         double binDb = 10 * Math.log10(binWidth);
         int n = sources.size();
         double[] apparent = new double[n];
@@ -117,7 +122,7 @@ public final class VerdictClassifier {
             int bestTaken = -1;
             for (int j = 0; j < seen.size(); j++) {
                 double d = Math.abs(seen.get(j).frequencyHz() - apparent[i]);
-                if (d > radius) {
+                if (d > (claimedBy[j] < 0 ? radius : mergeRadius)) {
                     continue;
                 }
                 if (claimedBy[j] < 0) {
