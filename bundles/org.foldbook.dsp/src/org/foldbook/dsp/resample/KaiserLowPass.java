@@ -60,10 +60,13 @@ public final class KaiserLowPass {
         double i0b = Bessel.i0(beta);
         double[] h = new double[n];
         double sum = 0;
-        for (int i = 0; i < n; i++) {
+        for (int i = 0; i <= order / 2; i++) {           // symmetric: first half and centre, then mirror
             double m = i - half;
             double u = half == 0 ? 0 : m / half;
             h[i] = fc * KaiserSinc.sinc(fc * m) * Bessel.i0(beta * Math.sqrt(Math.max(0, 1 - u * u))) / i0b;
+            h[n - 1 - i] = h[i];
+        }
+        for (int i = 0; i < n; i++) {
             sum += h[i];
         }
         for (int i = 0; i < n; i++) {
