@@ -35,7 +35,7 @@ import org.foldbook.dsp.sweep.SweepResult;
  * <pre>
  * java -Xms4g -Xmx4g -cp benchmarks.jar org.foldbook.bench.sweep.PeerSideBySide \
  *   --peer ../shared/peer/peer_sweep.py --signal rec1e6.f64 --grid grid.txt --details details.json \
- *   --mode a --threads 1 --sweeps 5 --warmup 2
+ *   --mode a --threads 1 --sweeps 5 --warmup 2 [--max-attempts 15]
  * </pre>
  * Prints one JSON line. Mode a = Java bare, b = Java peer-poly; --threads N pairs with the peer's --jobs N.
  */
@@ -53,6 +53,7 @@ public final class PeerSideBySide {
         int sweeps = 5;
         int warmup = 2;
         double fs0 = 100_000;
+        int maxAttempts = -1;
         for (int i = 0; i < args.length; i += 2) {
             String v = args[i + 1];
             switch (args[i]) {
@@ -65,11 +66,15 @@ public final class PeerSideBySide {
                 case "--sweeps" -> sweeps = Integer.parseInt(v);
                 case "--warmup" -> warmup = Integer.parseInt(v);
                 case "--fs0" -> fs0 = Double.parseDouble(v);
+                case "--max-attempts" -> maxAttempts = Integer.parseInt(v);
                 default -> throw new IllegalArgumentException("unknown option " + args[i]);
             }
         }
         if (peer == null || signal == null || grid == null) {
             throw new IllegalArgumentException("--peer, --signal and --grid are required");
+        }
+        if (maxAttempts < 0) {
+            maxAttempts = 3 * sweeps;   // redo sweeps that others disturbed, up to this many rounds
         }
         double[] x = readF64(signal);
         RateLadder ladder;
@@ -94,7 +99,7 @@ public final class PeerSideBySide {
             List<double[]> javaRuns = new ArrayList<>();
             List<double[]> peerRuns = new ArrayList<>();
             int attempts = 0;
-            while ((clean(javaRuns) < sweeps || clean(peerRuns) < sweeps) && attempts < 3 * sweeps) {
+            while ((clean(javaRuns) < sweeps || clean(peerRuns) < sweeps) && attempts < maxAttempts) {
                 attempts++;
                 if (clean(peerRuns) < sweeps) {
                     peerRuns.add(peerSweep(peer, signal, fs0, mode, threads));
