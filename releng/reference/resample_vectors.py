@@ -17,6 +17,8 @@ What is written:
   bare_U_D.txt           windowed-sinc evaluation of input at t_m = m*D/U, evaluated per output
                          sample straight from the formula (numpy sinc, scipy.special.i0), W=16, beta=10
   poly_U_D.txt           scipy.signal.resample_poly(input, U, D) with its defaults
+  poly_response_R20.txt  fraction-of-new-rate  |H| dB of resample_poly's default filter for R = 20
+                         (scipy.signal.freqz of firwin(401, 1/20, window=('kaiser', 5.0)))
   kaiserord.txt          A width -> scipy.signal.kaiserord(A, width) numtaps, beta (width re Nyquist)
   firwin_kaiser.txt      scipy.signal.firwin(numtaps, cutoff, window=('kaiser', kaiser_beta(A))) for a
                          low-pass of rate 1, pass 0.2, stop 0.25, A = 100 dB; numtaps = M+1 with
@@ -104,6 +106,15 @@ def kaiser_tables():
           % (m + 1, 0.5 * (fp + fst) / (rate / 2), ss.kaiser_beta(a)))
 
 
+def poly_response():
+    r = 20
+    h = ss.firwin(2 * 10 * r + 1, 1.0 / r, window=("kaiser", 5.0))
+    fr = np.array([0.1, 0.4, 0.45, 0.5, 0.55, 0.6, 0.75])        # fractions of the new rate fs0/R
+    _, hh = ss.freqz(h, worN=2 * np.pi * fr / r)
+    write("poly_response_R20.txt", ["%r %s" % (float(f), g17(20 * np.log10(abs(v)))) for f, v in zip(fr, hh)],
+          "f/fs_new |H| dB: scipy.signal.freqz(firwin(401, 1/20, window=('kaiser', 5.0))) at 2*pi*f/20")
+
+
 def synthetic_input(n):
     """Clearly synthetic input: three tones (one near 0.42 of the rate) plus seeded Gaussian noise."""
     t = np.arange(n, dtype=np.float64)
@@ -141,6 +152,7 @@ def main():
     rate_grid()
     i0_table()
     kaiser_tables()
+    poly_response()
     x = synthetic_input(1000)
     write("input.txt", [g17(v) for v in x],
           "synthetic input, 1000 samples: sin(2pi 0.013 n + 0.1) + 0.5 sin(2pi 0.137 n + 0.7) "

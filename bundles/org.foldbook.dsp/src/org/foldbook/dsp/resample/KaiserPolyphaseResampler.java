@@ -23,17 +23,19 @@ public final class KaiserPolyphaseResampler implements Resampler {
 
     private final RateRatio ratio;
     private final PolyphaseKernel kernel;   // null for 1/1 (a copy)
+    private final double[] prototype;       // unit DC gain, at up·fs0; null for 1/1
 
-    private KaiserPolyphaseResampler(RateRatio ratio, PolyphaseKernel kernel) {
+    private KaiserPolyphaseResampler(RateRatio ratio, PolyphaseKernel kernel, double[] prototype) {
         this.ratio = ratio;
         this.kernel = kernel;
+        this.prototype = prototype;
     }
 
     /** scipy.signal.resample_poly(x, up, down)'s default filter for {@code ratio}; 1/1 is a plain copy, as there. */
     public static KaiserPolyphaseResampler resamplePolyDefaults(RateRatio ratio) {
         Objects.requireNonNull(ratio, "ratio");
         if (ratio.up() == 1 && ratio.down() == 1) {
-            return new KaiserPolyphaseResampler(ratio, null);
+            return new KaiserPolyphaseResampler(ratio, null, null);
         }
         int up = BareSampler.phaseCount(ratio);
         int down = BareSampler.intDown(ratio);
@@ -43,11 +45,12 @@ public final class KaiserPolyphaseResampler implements Resampler {
             throw new IllegalArgumentException("ratio " + ratio + " needs a prototype of " + (2 * half + 1)
                     + " taps; choose a smaller denominator bound");
         }
-        double[] g = firwinKaiser((int) (2 * half + 1), 1.0 / r, 5.0);
+        double[] proto = firwinKaiser((int) (2 * half + 1), 1.0 / r, 5.0);
+        double[] g = new double[proto.length];
         for (int i = 0; i < g.length; i++) {
-            g[i] *= up;
+            g[i] = proto[i] * up;
         }
-        return new KaiserPolyphaseResampler(ratio, PolyphaseKernel.fromPrototype(up, down, g, (int) half));
+        return new KaiserPolyphaseResampler(ratio, PolyphaseKernel.fromPrototype(up, down, g, (int) half), proto);
     }
 
     /**
@@ -85,6 +88,16 @@ public final class KaiserPolyphaseResampler implements Resampler {
     @Override
     public RateRatio ratio() {
         return ratio;
+    }
+
+    /**
+     * |H(f)| of the filter for source content at {@code frequency} given as a fraction of the source
+     * rate (the prototype's DTFT; 1 for the 1/1 copy). Aliases aside, the gain content gets before the
+     * rate change.
+     */
+    public double magnitude(double frequency) {
+        Check.finite("frequency", frequency);
+        return prototype == null ? 1.0 : Math.abs(KaiserLowPass.amplitude(prototype, frequency / ratio.up()));
     }
 
     /** Multiply-adds per output sample. */
