@@ -110,15 +110,21 @@ public final class PeerSideBySide {
                     long s = System.nanoTime();
                     engine.run(x, ladder, java, SpectrumSettings.DEFAULT, SweepProgress.NONE);
                     double wall = (System.nanoTime() - s) * 1e-9;
-                    double others = Math.max(0, (MachineLoad.machineBusySeconds() - b0)
-                            - (MachineLoad.ownCpuSeconds() - o0));
-                    javaRuns.add(new double[] {wall, others});
+                    double own = MachineLoad.ownCpuSeconds() - o0;
+                    double others = Math.max(0, (MachineLoad.machineBusySeconds() - b0) - own);
+                    javaRuns.add(new double[] {wall, others, own});
                 }
             }
             out.append(",\"java\":").append(runs(javaRuns)).append(",\"peer\":").append(runs(peerRuns));
             double jm = medianClean(javaRuns);
             double pm = medianClean(peerRuns);
-            out.append(String.format(Locale.ROOT, ",\"ratio_java_over_peer\":%.4f}", jm / pm));
+            out.append(String.format(Locale.ROOT, ",\"ratio_java_over_peer\":%.4f", jm / pm));
+            if (threads == 1) {
+                // one thread each: CPU-seconds are a second, less load-sensitive measure
+                out.append(String.format(Locale.ROOT, ",\"cpu_ratio_java_over_peer\":%.4f",
+                        median(javaRuns, 2) / median(peerRuns, 2)));
+            }
+            out.append('}');
         }
         System.out.println(out);
     }
@@ -134,7 +140,7 @@ public final class PeerSideBySide {
         if (p.waitFor() != 0) {
             throw new IOException("peer failed: " + json);
         }
-        return new double[] {first(json, "wall_s_all"), first(json, "others_cpu_s_all")};
+        return new double[] {first(json, "wall_s_all"), first(json, "others_cpu_s_all"), first(json, "cpu_s_all")};
     }
 
     static double first(String json, String key) {
@@ -157,10 +163,19 @@ public final class PeerSideBySide {
         return w.length % 2 == 1 ? w[w.length / 2] : 0.5 * (w[w.length / 2 - 1] + w[w.length / 2]);
     }
 
+    static double median(List<double[]> runs, int column) {
+        double[] v = runs.stream().mapToDouble(r -> r[column]).sorted().toArray();
+        return v.length % 2 == 1 ? v[v.length / 2] : 0.5 * (v[v.length / 2 - 1] + v[v.length / 2]);
+    }
+
     static String runs(List<double[]> runs) {
         StringBuilder b = new StringBuilder("{\"wall_s_all\":[");
         for (int i = 0; i < runs.size(); i++) {
             b.append(i > 0 ? "," : "").append(String.format(Locale.ROOT, "%.4f", runs.get(i)[0]));
+        }
+        b.append("],\"cpu_s_all\":[");
+        for (int i = 0; i < runs.size(); i++) {
+            b.append(i > 0 ? "," : "").append(String.format(Locale.ROOT, "%.2f", runs.get(i)[2]));
         }
         b.append("],\"others_cpu_s_all\":[");
         for (int i = 0; i < runs.size(); i++) {
