@@ -86,6 +86,43 @@ class WavReaderVariantsTest {
     }
 
     @Test
+    void framesLargerThanTheReadBufferStillRead() throws IOException {
+        // synthetic: 1024 channels of float64 make 8192-byte frames, twice the 4096-byte buffer asked for
+        ByteBuffer f = ByteBuffer.allocate(16).order(ByteOrder.LITTLE_ENDIAN).putShort((short) 3).putShort((short) 1024)
+                .putInt(1000).putInt(1000 * 8192).putShort((short) 8192).putShort((short) 64);
+        ByteBuffer d = ByteBuffer.allocate(2 * 8192).order(ByteOrder.LITTLE_ENDIAN);
+        for (int i = 0; i < 2048; i++) {
+            d.putDouble(i / 4096.0);
+        }
+        Path p = write("wide.wav", RiffFiles.riff(RiffFiles.chunk("fmt ", f.array()), RiffFiles.chunk("data", d.array())));
+        try (RecordingReader r = WavReader.open(p, new ReadOptions(true, 4096))) {
+            double[][] got = TestFiles.readAll(r, 1);
+            assertEquals(1024, got.length);
+            assertEquals(1023 / 4096.0, got[1023][0], 0.0);
+            assertEquals(2047 / 4096.0, got[1023][1], 0.0);
+        }
+    }
+
+    @Test
+    void rf64TableSizeForAnotherChunk() throws IOException {
+        // EBU Tech 3306 ds64 table: a chunk whose 32-bit size is 0xFFFFFFFF takes its size from the table
+        ByteBuffer ds64 = ByteBuffer.allocate(28 + 12).order(ByteOrder.LITTLE_ENDIAN);
+        long riffSize = 4 + (8 + 40) + (8 + 6) + (8 + fmt.length) + 8 + data.length;
+        ds64.putLong(riffSize).putLong(data.length).putLong(240).putInt(1).put("big1".getBytes()).putLong(6);
+        java.io.ByteArrayOutputStream o = new java.io.ByteArrayOutputStream();
+        o.writeBytes("RF64".getBytes());
+        o.writeBytes(RiffFiles.le32(-1));
+        o.writeBytes("WAVE".getBytes());
+        o.writeBytes(RiffFiles.chunk("ds64", ds64.array()));
+        o.writeBytes("big1".getBytes());
+        o.writeBytes(RiffFiles.le32(-1));
+        o.writeBytes(new byte[6]);
+        o.writeBytes(RiffFiles.chunk("fmt ", fmt));
+        o.writeBytes(RiffFiles.chunk("data", data));
+        assertSamples(write("table.rf64", o.toByteArray()));
+    }
+
+    @Test
     void sha256CoversTheWholeFileAndMatchesTheJdkDigest() throws Exception {
         byte[] content = RiffFiles.riff(RiffFiles.chunk("fmt ", fmt), RiffFiles.chunk("data", data),
                 RiffFiles.chunk("tail", new byte[33]));
