@@ -59,7 +59,11 @@ final class PolyphaseKernel {
         }
         int kMax = Math.floorDiv(g.length - 1 - center, up);
         int kMin = -Math.floorDiv(center + up - 1, up);       // ceil((-center - (up-1)) / up)
-        int taps = kMax - kMin + 1;
+        int used = kMax - kMin + 1;
+        // With several phases, rows of up to 32 taps are padded with zeros to 32: that length has the
+        // fully unrolled loops that take four outputs of one phase per pass (see run32), which is faster
+        // than a general loop over fewer taps even counting the zeros.
+        int taps = used <= 32 && up >= 4 ? 32 : used;
         if ((long) up * taps > MAX_TABLE) {
             throw new IllegalArgumentException("polyphase table of " + up + " phases x " + taps + " taps exceeds "
                     + MAX_TABLE + " coefficients");
