@@ -67,6 +67,36 @@ final class StreamingWelch implements SampleSink {
         }
     }
 
+    /**
+     * Zero-copy feeding: a producer writes up to {@link #room()} samples straight into {@link #buffer()} from
+     * {@link #position()} on, then calls {@link #advance}.
+     */
+    double[] buffer() {
+        return buf;
+    }
+
+    int position() {
+        return filled;
+    }
+
+    int room() {
+        return chunkLength - filled;
+    }
+
+    /** Takes the {@code count <= room()} samples just written at {@link #position()}. */
+    void advance(int count) {
+        if (count < 0 || count > room()) {
+            throw new IllegalArgumentException("count must lie in [0, " + room() + "], was " + count);
+        }
+        filled += count;
+        if (filled == chunkLength) {
+            addChunk(chunkLength);
+            int keep = welch.overlap();
+            System.arraycopy(buf, chunkLength - keep, buf, 0, keep);
+            filled = keep;
+        }
+    }
+
     private void addChunk(int length) {
         int k = welch.psdInto(buf, 0, length, rate, ws, part);
         for (int i = 0, b = welch.bins(); i < b; i++) {

@@ -156,14 +156,15 @@ public final class SweepEngine implements AutoCloseable {
             direct = poly::evaluate;
         }
         if (direct != null) {
-            // random access straight from the shared array into the Welch buffer: no input copy per rate
-            for (long first = 0; first < m; first += BLOCK) {
+            // random access straight from the shared array into the Welch buffer: no copy of input or output
+            for (long first = 0; first < m; ) {
                 if (progress.isCancelled()) {
                     throw new CancellationException("sweep cancelled");
                 }
-                int count = (int) Math.min(BLOCK, m - first);
-                direct.evaluate(x, first, ws.block, 0, count);
-                ws.welch.accept(ws.block, 0, count);
+                int count = (int) Math.min(ws.welch.room(), m - first);
+                direct.evaluate(x, first, ws.welch.buffer(), ws.welch.position(), count);
+                ws.welch.advance(count);
+                first += count;
             }
         } else {
             ResampleRun run = resampler.start(ws.welch);
@@ -190,7 +191,6 @@ public final class SweepEngine implements AutoCloseable {
     /** Per-thread buffers, reused from rate to rate. */
     private static final class WorkerState {
         final StreamingWelch welch;
-        final double[] block = new double[BLOCK];
         final double[] psd;
 
         WorkerState(int maxSegment) {
