@@ -189,6 +189,9 @@ class AnalogLowPassTest {
                 "poles[0]", "1.0");
         assertMessage(() -> new AnalogFilter("x", new Complex[0], new Complex[] {new Complex(-1, 1)}, 1, 1, true, null),
                 "poles", "conjugate");
+        assertMessage(() -> Cascade.of(AnalogLowPass.rc(FC), null), "stages[1]", "null");
+        assertMessage(() -> Cascade.of(java.util.List.of()), "stages", "[]");
+        assertMessage(() -> new FrequencyBand(5, 2), "band", "[5.0, 2.0]");
     }
 
     static void assertMessage(org.junit.jupiter.api.function.Executable e, String... parts) {
