@@ -103,13 +103,16 @@ public final class ChainSummary {
         Optional<org.foldbook.dsp.digitizer.ChainFigures> figures = ChainFigures.figures(chain);
         if (figures.isPresent()) {
             org.foldbook.dsp.digitizer.ChainFigures f = figures.get();
-            rows.add(new Row("Whole chain at Nyquist", db(f.attenuationAtNyquistDb()) + " attenuation"));
+            String whole = db(f.attenuationAtNyquistDb()) + " attenuation";
+            if (!rows.get(rows.size() - 1).value().equals(whole)) { // differs when a digital filter adds to it
+                rows.add(new Row("Whole chain at Nyquist", whole));
+            }
             rows.add(new Row("Needed (" + f.bits() + "-bit, full-scale tone)", db(f.requiredAttenuationDb())));
-            String band = hz(f.aliasFreeBandHz());
+            String band = f.aliasFreeBandHz() > 0 ? "0 – " + hz(f.aliasFreeBandHz()) : "none";
             if (!Double.isNaN(f.limitingSourceHz())) {
                 band += " (limited by content at " + hz(f.limitingSourceHz()) + ")";
             }
-            rows.add(new Row("Alias-free band", "0 – " + band));
+            rows.add(new Row("Alias-free band", band));
             rows.add(new Row("Protection margin", Double.isInfinite(f.marginDb()) ? "nothing above Nyquist reaches the digitizer"
                     : signedDb(f.marginDb()) + (f.marginDb() >= 0 ? " (protected)" : " (short of the need)")));
         }
@@ -172,6 +175,14 @@ public final class ChainSummary {
 
     static String ms(double seconds) {
         return number(seconds * 1000) + " ms";
+    }
+
+    /** A value for an input field, in full: 25600, 10000, 0.0008 (no exponent, no trailing zeros). */
+    static String plain(double value) {
+        if (!Double.isFinite(value)) {
+            return "";
+        }
+        return new java.math.BigDecimal(Double.toString(value)).stripTrailingZeros().toPlainString();
     }
 
     /** Up to four significant digits, no trailing zeros: 12.8, 906.5, 0.8, 25.6. */

@@ -58,6 +58,7 @@ public class NotebookPart {
     public static final String PART_ID = "org.foldbook.ui.part.notebook";
     private static final int CHART_POINTS = 800;
     private static final double CHART_FLOOR_DB = -160;
+    private static final String SETTINGS_HINT = "Enter applies a change, Ctrl+Z undoes it.";
 
     @Inject
     @org.eclipse.e4.core.di.annotations.Optional
@@ -84,6 +85,7 @@ public class NotebookPart {
     private Button checkButton;
     private Button stopButton;
     private Table findings;
+    private Label findingText;
 
     private NotebookDocument document;
     private SignalChain shownChain;
@@ -111,14 +113,15 @@ public class NotebookPart {
         fileLabel.setText("No notebook open. File ▸ Open notebook… (Ctrl+O) opens one.");
         GridDataFactory.fillDefaults().grab(true, false).applyTo(fileLabel);
 
-        SashForm outer = new SashForm(parent, SWT.VERTICAL);
+        // tree on the left over the full height; details above findings on the right
+        SashForm outer = new SashForm(parent, SWT.HORIZONTAL);
         GridDataFactory.fillDefaults().grab(true, true).applyTo(outer);
-        SashForm main = new SashForm(outer, SWT.HORIZONTAL);
-        createTree(main);
-        createDetails(main);
-        main.setWeights(38, 62);
-        createFindings(outer);
-        outer.setWeights(72, 28);
+        createTree(outer);
+        SashForm right = new SashForm(outer, SWT.VERTICAL);
+        createDetails(right);
+        createFindings(right);
+        right.setWeights(66, 34);
+        outer.setWeights(34, 66);
 
         if (current != null) {
             current.addListener(onOpen);
@@ -145,7 +148,7 @@ public class NotebookPart {
         });
         TreeViewerColumn summary = new TreeViewerColumn(tree, SWT.LEFT);
         summary.getColumn().setText("Summary");
-        summary.getColumn().setWidth(220);
+        summary.getColumn().setWidth(190);
         summary.setLabelProvider(new ColumnLabelProvider() {
             @Override
             public String getText(Object element) {
@@ -164,43 +167,44 @@ public class NotebookPart {
         GridDataFactory.fillDefaults().grab(true, false).applyTo(title);
         chainPath = new Label(details, SWT.WRAP);
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(chainPath);
+        settings = new Composite(details, SWT.NONE);
+        GridLayoutFactory.fillDefaults().numColumns(7).spacing(6, 4).applyTo(settings);
+        GridDataFactory.fillDefaults().grab(true, false).applyTo(settings);
+        new Label(settings, SWT.NONE).setText("Sampling rate:");
+        rateField = new Text(settings, SWT.BORDER);
+        GridDataFactory.fillDefaults().hint(80, SWT.DEFAULT).applyTo(rateField);
+        new Label(settings, SWT.NONE).setText("S/s");
+        new Label(settings, SWT.NONE).setText("   Filter cutoff:");
+        cutoffField = new Text(settings, SWT.BORDER);
+        GridDataFactory.fillDefaults().hint(80, SWT.DEFAULT).applyTo(cutoffField);
+        new Label(settings, SWT.NONE).setText("Hz");
+        // the hint, or what is wrong with the value typed (one line, so the layout does not jump)
+        settingsStatus = new Label(settings, SWT.NONE);
+        GridDataFactory.fillDefaults().grab(true, false).indent(16, 0).align(SWT.FILL, SWT.CENTER).applyTo(settingsStatus);
+        rateField.addListener(SWT.DefaultSelection, e -> applySetting(rateField, true));
+        cutoffField.addListener(SWT.DefaultSelection, e -> applySetting(cutoffField, false));
+        settings.setVisible(false);
 
         Composite middle = new Composite(details, SWT.NONE);
         GridLayoutFactory.fillDefaults().numColumns(2).spacing(8, 4).applyTo(middle);
         GridDataFactory.fillDefaults().grab(true, true).applyTo(middle);
 
-        Composite left = new Composite(middle, SWT.NONE);
-        GridLayoutFactory.fillDefaults().spacing(4, 4).applyTo(left);
-        GridDataFactory.fillDefaults().grab(false, true).hint(420, SWT.DEFAULT).applyTo(left);
-        figures = new Table(left, SWT.BORDER | SWT.FULL_SELECTION);
+        figures = new Table(middle, SWT.BORDER | SWT.FULL_SELECTION | SWT.V_SCROLL);
         figures.setHeaderVisible(true);
         figures.setLinesVisible(true);
         for (String column : new String[] { "Figure", "Value" }) {
             TableColumn c = new TableColumn(figures, SWT.LEFT);
             c.setText(column);
-            c.setWidth(column.equals("Figure") ? 190 : 220);
+            c.setWidth(column.equals("Figure") ? 200 : 260);
         }
-        GridDataFactory.fillDefaults().grab(true, true).applyTo(figures);
+        GridDataFactory.fillDefaults().grab(false, true).hint(480, SWT.DEFAULT).applyTo(figures);
 
-        settings = new Composite(left, SWT.NONE);
-        GridLayoutFactory.fillDefaults().numColumns(3).spacing(6, 4).applyTo(settings);
-        GridDataFactory.fillDefaults().grab(true, false).applyTo(settings);
-        new Label(settings, SWT.NONE).setText("Sampling rate:");
-        rateField = new Text(settings, SWT.BORDER);
-        GridDataFactory.fillDefaults().hint(90, SWT.DEFAULT).applyTo(rateField);
-        new Label(settings, SWT.NONE).setText("S/s (Enter applies)");
-        new Label(settings, SWT.NONE).setText("Filter cutoff:");
-        cutoffField = new Text(settings, SWT.BORDER);
-        GridDataFactory.fillDefaults().hint(90, SWT.DEFAULT).applyTo(cutoffField);
-        new Label(settings, SWT.NONE).setText("Hz (Enter applies)");
-        settingsStatus = new Label(settings, SWT.WRAP);
-        GridDataFactory.fillDefaults().span(3, 1).grab(true, false).hint(380, SWT.DEFAULT).applyTo(settingsStatus);
-        rateField.addListener(SWT.DefaultSelection, e -> applySetting(rateField, true));
-        cutoffField.addListener(SWT.DefaultSelection, e -> applySetting(cutoffField, false));
-        settings.setVisible(false);
+        Composite right = new Composite(middle, SWT.NONE);
+        GridLayoutFactory.fillDefaults().spacing(4, 4).applyTo(right);
+        GridDataFactory.fillDefaults().grab(true, true).applyTo(right);
+        plot = new PlotView(right, "Chain response", "Frequency (Hz)", "Gain (dB)");
+        GridDataFactory.fillDefaults().grab(true, true).hint(300, 200).applyTo(plot.control());
 
-        plot = new PlotView(middle, "Chain magnitude response", "Frequency (Hz)", "Gain (dB)");
-        GridDataFactory.fillDefaults().grab(true, true).hint(300, 220).applyTo(plot.control());
     }
 
     private void createFindings(Composite parent) {
@@ -234,7 +238,10 @@ public class NotebookPart {
                 default -> 900;
             });
         }
-        GridDataFactory.fillDefaults().span(4, 1).grab(true, true).applyTo(findings);
+        GridDataFactory.fillDefaults().span(4, 1).grab(true, true).hint(SWT.DEFAULT, 60).applyTo(findings);
+        findingText = new Label(box, SWT.WRAP);
+        GridDataFactory.fillDefaults().span(4, 1).grab(true, false).hint(400, SWT.DEFAULT).applyTo(findingText);
+        findings.addListener(SWT.Selection, e -> showFindingText(findings.getSelectionIndex()));
         findings.addListener(SWT.DefaultSelection, e -> {
             int index = findings.getSelectionIndex();
             if (index >= 0 && index < shownFindings.size() && shownFindings.get(index).subject() != null) {
@@ -253,6 +260,7 @@ public class NotebookPart {
         shownChain = null;
         shownFindings.clear();
         findings.removeAll();
+        findingText.setText("");
         if (next == null) {
             tree.setInput(null);
             fileLabel.setText("No notebook open.");
@@ -264,6 +272,8 @@ public class NotebookPart {
         tree.expandToLevel(4); // notebook, headings, rigs and experiments, chains and channels
         updateFileLabel();
         showDetails(null);
+        next.notebook().getExperiments().stream().flatMap(e -> e.getChannels().stream()).findFirst()
+                .ifPresent(this::select); // something to read at once
         validate();
     }
 
@@ -314,7 +324,8 @@ public class NotebookPart {
         title.setText(heading);
         figures.removeAll();
         plot.clear();
-        settingsStatus.setText("");
+        settingsStatus.setText(SETTINGS_HINT);
+        settingsStatus.setForeground(null);
         if (chain == null) {
             chainPath.setText("");
             settings.setVisible(false);
@@ -327,14 +338,17 @@ public class NotebookPart {
             TableItem item = new TableItem(figures, SWT.NONE);
             item.setText(new String[] { row.figure(), row.value() });
         }
-        figures.getColumn(1).pack();
-        figures.getColumn(1).setWidth(Math.max(220, figures.getColumn(1).getWidth()));
+        for (TableColumn column : figures.getColumns()) {
+            int width = column.getWidth();
+            column.pack();
+            column.setWidth(Math.max(width, column.getWidth()));
+        }
         Stage sampler = ChainFigures.samplingStage(chain);
         Stage filter = ChainFigures.filterStage(chain);
         settings.setVisible(sampler != null);
-        rateField.setText(sampler == null ? "" : ChainSummary.number(ChainFigures.samplingRateHz(chain)));
+        rateField.setText(sampler == null ? "" : ChainSummary.plain(ChainFigures.samplingRateHz(chain)));
         cutoffField.setEnabled(filter != null);
-        cutoffField.setText(filter == null ? "" : ChainSummary.number(ChainFigures.effectiveCutoffHz(filter)));
+        cutoffField.setText(filter == null ? "" : ChainSummary.plain(ChainFigures.effectiveCutoffHz(filter)));
         drawResponse(chain);
         title.getParent().layout(true, true);
     }
@@ -364,13 +378,13 @@ public class NotebookPart {
             if (to > from) {
                 double[] fx = java.util.Arrays.copyOfRange(x, from, to + 1);
                 double[] fy = java.util.Arrays.copyOfRange(y, from, to + 1);
-                plot.addLine(protectedChain ? "folds (after the filter)" : "folds unprotected", fx, fy);
+                plot.addLine(protectedChain ? "folds, filtered" : "folds, unfiltered", fx, fy);
             }
         }
-        plot.addMarker("Nyquist " + ChainSummary.hz(nyquist), new double[] { nyquist, nyquist },
+        plot.addMarker("Nyquist", new double[] { nyquist, nyquist },
                 new double[] { CHART_FLOOR_DB, 5 });
         Optional<org.foldbook.dsp.digitizer.ChainFigures> f = ChainFigures.figures(chain);
-        f.ifPresent(fig -> plot.addMarker(String.format(Locale.ROOT, "needed −%.0f dB", fig.requiredAttenuationDb()),
+        f.ifPresent(fig -> plot.addMarker(String.format(Locale.ROOT, "need −%.0f dB", fig.requiredAttenuationDb()),
                 new double[] { 0, top }, new double[] { -fig.requiredAttenuationDb(), -fig.requiredAttenuationDb() }));
         plot.setRanges(new Range(0, top), new Range(CHART_FLOOR_DB, 5));
     }
@@ -388,23 +402,29 @@ public class NotebookPart {
         try {
             value = Double.parseDouble(field.getText().trim());
         } catch (NumberFormatException e) {
-            settingsStatus.setText((rate ? "Sampling rate" : "Filter cutoff") + " is not a number: '"
+            settingsProblem((rate ? "Sampling rate" : "Filter cutoff") + " is not a number: '"
                     + field.getText().trim() + "'.");
             return;
         }
         if (!(value > 0) || Double.isInfinite(value)) {
-            settingsStatus.setText((rate ? "Sampling rate" : "Filter cutoff") + " must be a positive number, was "
+            settingsProblem((rate ? "Sampling rate" : "Filter cutoff") + " must be a positive number, was "
                     + field.getText().trim() + ".");
             return;
         }
         if (rate && stage.getDevice() instanceof Digitizer digitizer && value > digitizer.getMaxRateHz()) {
-            settingsStatus.setText("Sampling rate " + ChainSummary.rate(value) + " is above the digitizer's maximum "
+            settingsProblem("Sampling rate " + ChainSummary.rate(value) + " is above the digitizer's maximum "
                     + ChainSummary.rate(digitizer.getMaxRateHz()) + ".");
             return;
         }
         Command command = SetCommand.create(document.domain(), stage,
                 rate ? NotebookPackage.Literals.STAGE__RATE_HZ : NotebookPackage.Literals.STAGE__CUTOFF_HZ, value);
         document.execute(command);
+    }
+
+    private void settingsProblem(String problem) {
+        settingsStatus.setText(problem);
+        settingsStatus.setForeground(display.getSystemColor(SWT.COLOR_DARK_RED));
+        settingsStatus.getParent().layout();
     }
 
     /** (Re)starts the validation of the open notebook; a running one is cancelled first. */
@@ -476,8 +496,20 @@ public class NotebookPart {
             }
         }
         findings.getColumn(2).pack();
+        if (!list.isEmpty()) {
+            findings.setSelection(0);
+        }
+        showFindingText(list.isEmpty() ? -1 : 0);
         findingsStatus.setText(list.isEmpty() ? "No findings: every rule passes and every recording matches its checksum."
                 : errors + " error(s), " + warnings + " warning(s). Double-click a finding to select its object.");
+    }
+
+    /** The whole message of a finding, wrapped, under the list (the list's column holds one line). */
+    private void showFindingText(int index) {
+        String text = index >= 0 && index < shownFindings.size()
+                ? shownFindings.get(index).object() + ": " + shownFindings.get(index).message() : "";
+        findingText.setText(text);
+        findingText.getParent().layout(true, true);
     }
 
     private void ui(Runnable r) {

@@ -109,20 +109,21 @@ final class NotebookTree implements ITreeContentProvider {
     /** Text of the tree's second column: the one fact worth seeing without selecting the row. */
     static String summary(Object element) {
         if (element instanceof Device device) {
-            return kind(device) + (device.getModelName() != null ? ": " + device.getModelName() : "");
+            return kind(device) + deviceSpec(device);
         }
         if (element instanceof SignalChain chain) {
             double rate = ChainFigures.samplingRateHz(chain);
             return Double.isNaN(rate) ? "no sampling stage"
-                    : "Nyquist " + ChainSummary.hz(rate / 2) + ", " + chain.getStages().size() + " stages";
+                    : "Nyquist " + ChainSummary.hz(rate / 2) + ", " + chain.getStages().size()
+                            + (chain.getStages().size() == 1 ? " stage" : " stages");
         }
         if (element instanceof Stage stage) {
             return stage.getDevice() == null ? "" : kind(stage.getDevice());
         }
         if (element instanceof Channel channel) {
-            String chain = channel.getChain() == null ? "no chain" : "via " + shortName(channel.getChain());
-            String unit = channel.getUnit() == null ? "" : " [" + channel.getUnit() + "]";
-            return chain + unit;
+            String unit = channel.getUnit() == null ? "" : "[" + channel.getUnit() + "] ";
+            return unit + (channel.getRecording() == null ? "no recording"
+                    : channel.getRecording().getId() + " ch " + channel.getChannelIndex());
         }
         if (element instanceof Recording recording) {
             return recording.getChannelCount() + " ch @ " + ChainSummary.rate(recording.getDeclaredRateHz())
@@ -164,6 +165,26 @@ final class NotebookTree implements ITreeContentProvider {
             return String.valueOf(notebook.getTitle());
         }
         return object.eClass().getName();
+    }
+
+    /** The figure that tells devices of one kind apart, e.g. ", 24-bit, 51.2 kS/s max". */
+    private static String deviceSpec(Device device) {
+        if (device instanceof org.foldbook.model.Sensor sensor) {
+            return (sensor.getUnit() != null ? ", " + sensor.getUnit() : "")
+                    + (sensor.getUsableMaxHz() != null ? ", to " + ChainSummary.hz(sensor.getUsableMaxHz()) : "");
+        }
+        if (device instanceof org.foldbook.model.AntiAliasFilter filter) {
+            return filter.getFamily() == org.foldbook.model.FilterFamily.NONE ? ", bypass"
+                    : ", " + ChainSummary.familyText(filter) + " @ " + ChainSummary.hz(filter.getCutoffHz());
+        }
+        if (device instanceof org.foldbook.model.Digitizer digitizer) {
+            return ", " + digitizer.getResolutionBits() + "-bit, " + ChainSummary.rate(digitizer.getMaxRateHz()) + " max"
+                    + (digitizer.isDigitalFilter() ? ", delta-sigma" : "");
+        }
+        if (device instanceof org.foldbook.model.Camera camera && !camera.getFrameRatesHz().isEmpty()) {
+            return ", to " + ChainSummary.number(java.util.Collections.max(camera.getFrameRatesHz())) + " frames/s";
+        }
+        return "";
     }
 
     static String kind(Device device) {

@@ -20,20 +20,22 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Starts the real Foldbook product (Equinox launcher, E4 application, our application model) with its
- * self-check switched on, and checks the report it leaves: the main window was shown, the fold
- * explorer part was rendered, and the screenshot holds a real picture. The screenshot stays in
+ * self-check switched on, and checks the report it leaves: the main window was shown, the notebook
+ * and fold explorer parts were rendered, the demo notebook was written into the fresh workspace, and
+ * the screenshot holds a real picture. The screenshot stays in
  * target/smoke/workbench.png for a person to look at.
  */
 class WorkbenchSmokeTest {
     private static final long START_TIMEOUT_SECONDS = 180;
 
     @Test
-    void productStartsAndRendersTheMainWindowAndPart() throws Exception {
+    void productStartsAndRendersTheMainWindowAndParts() throws Exception {
         Path product = Path.of(System.getProperty("foldbook.product.dir"));
         Path out = Path.of(System.getProperty("foldbook.smoke.dir"));
         Files.createDirectories(out);
         Files.deleteIfExists(out.resolve("self-check.properties"));
         Files.deleteIfExists(out.resolve("workbench.png"));
+        deleteTree(out.resolve("workspace")); // a fresh workspace: the first start writes the demo notebook
 
         List<String> command = new ArrayList<>();
         command.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
@@ -71,6 +73,11 @@ class WorkbenchSmokeTest {
         assertEquals("visible", report.getProperty("window.org.foldbook.app.window.main"), report.toString());
         assertEquals("Foldbook", report.getProperty("window.title"), report.toString());
         assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.foldExplorer"), report.toString());
+        assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.notebook"), report.toString());
+        // first start: the demo notebook was written into the workspace (-data) and opened from there
+        Path demo = out.resolve("workspace/demo/gearbox-stand.foldbook");
+        assertTrue(Files.isRegularFile(demo), "no demo notebook at " + demo + "; console:\n" + console);
+        assertTrue(Files.isRegularFile(out.resolve("workspace/demo/data/vibration-run1.wav")), "no demo recording");
         assertTrue(!console.contains("!ENTRY") || !console.contains("Exception"),
                 "the workbench logged an exception:\n" + console);
 
@@ -97,6 +104,17 @@ class WorkbenchSmokeTest {
                 } else {
                     Files.copy(p, target, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
                 }
+            }
+        }
+    }
+
+    private static void deleteTree(Path root) throws IOException {
+        if (!Files.exists(root)) {
+            return;
+        }
+        try (var paths = Files.walk(root)) {
+            for (Path p : paths.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.delete(p);
             }
         }
     }
