@@ -143,9 +143,9 @@ final class PolyphaseKernel {
         }
     }
 
-    // The 32-tap case (the bare sampler) gets its own loops. Every output is summed in one fixed order
-    // (even taps and odd taps in two running sums, then added), whichever loop computes it, so results
-    // do not depend on how a caller splits the output range into blocks.
+    // The 32-tap case (the bare sampler, short filtered rows) gets its own loops. Every output is summed
+    // in one fixed order (four running sums over taps i ≡ 0, 1, 2, 3 mod 4, combined as (s0+s2)+(s1+s3)),
+    // whichever loop computes it, so results do not depend on how a caller splits the output range.
     private void run32(double[] x, int pos, int p, long m0, double[] out, int outOff, int count) {
         int done = 0;
         if (up >= 4 && count >= 8 * up) {
