@@ -170,6 +170,42 @@ class NotebookPartTest {
         assertEquals("25.6 kHz", figures().get("Nyquist frequency"));
     }
 
+    @Test
+    @DisplayName("a truncated notebook file: the job reports file, line and problem, and leaves the file as it was")
+    void damagedFileIsReportedAndKept() throws Exception {
+        Path damaged = folder.resolve("damaged.foldbook");
+        byte[] whole = java.nio.file.Files.readAllBytes(document.file());
+        byte[] truncated = java.util.Arrays.copyOf(whole, whole.length / 2);
+        java.nio.file.Files.write(damaged, truncated);
+        List<String> problems = new java.util.concurrent.CopyOnWriteArrayList<>();
+        List<NotebookDocument> opened = new java.util.concurrent.CopyOnWriteArrayList<>();
+        OpenNotebookJob job = OpenNotebookJob.of(damaged, opened::add, problems::add);
+        job.schedule();
+        job.join();
+        assertTrue(opened.isEmpty());
+        assertEquals(1, problems.size());
+        assertTrue(problems.get(0).contains(damaged.toString()) && problems.get(0).contains("line"), problems.get(0));
+        assertTrue(java.util.Arrays.equals(truncated, java.nio.file.Files.readAllBytes(damaged)), "the file was changed");
+
+        // the part of a workbench whose start-up failed to open it says why (besides the dialog)
+        CurrentNotebook current = new CurrentNotebook();
+        NotebookPart other = new NotebookPart();
+        other.current = current;
+        Shell second = new Shell(display);
+        try {
+            other.createControls(second);
+            current.failed(problems.get(0));
+            assertTrue(findAll(second, Label.class).stream()
+                    .anyMatch(l -> l.getText().equals("Could not open the notebook: " + problems.get(0))));
+            current.open(NotebookDocument.load(document.file())); // a later open replaces the message
+            assertEquals(current.document(), other.document());
+        } finally {
+            other.dispose();
+            second.dispose();
+            current.document().dispose();
+        }
+    }
+
     private Channel channel(String name) {
         for (Experiment e : document.notebook().getExperiments()) {
             for (Channel c : e.getChannels()) {

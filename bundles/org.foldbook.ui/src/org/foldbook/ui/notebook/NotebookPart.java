@@ -109,9 +109,9 @@ public class NotebookPart {
     public void createControls(Composite parent) {
         display = parent.getDisplay();
         GridLayoutFactory.fillDefaults().margins(6, 6).spacing(4, 4).applyTo(parent);
-        fileLabel = new Label(parent, SWT.NONE);
+        fileLabel = new Label(parent, SWT.WRAP);
         fileLabel.setText("No notebook open. File ▸ Open notebook… (Ctrl+O) opens one.");
-        GridDataFactory.fillDefaults().grab(true, false).applyTo(fileLabel);
+        GridDataFactory.fillDefaults().grab(true, false).hint(400, SWT.DEFAULT).applyTo(fileLabel);
 
         // tree on the left over the full height; details above findings on the right
         SashForm outer = new SashForm(parent, SWT.HORIZONTAL);
@@ -279,7 +279,8 @@ public class NotebookPart {
 
     private void showProblem(String problem) {
         fileLabel.setText("Could not open the notebook: " + problem);
-        fileLabel.getParent().layout();
+        fileLabel.setForeground(display.getSystemColor(SWT.COLOR_DARK_RED));
+        fileLabel.getParent().layout(true, true);
     }
 
     /** Selects and reveals {@code element} in the tree (a model object), which updates the details. */
@@ -290,6 +291,7 @@ public class NotebookPart {
 
     private void updateFileLabel() {
         fileLabel.setText(document.file() + (document.isDirty() ? "   (changed, not saved)" : ""));
+        fileLabel.setForeground(null);
         if (part != null) {
             part.setDirty(document.isDirty());
         }
