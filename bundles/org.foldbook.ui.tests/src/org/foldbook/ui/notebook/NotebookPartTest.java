@@ -171,6 +171,54 @@ class NotebookPartTest {
     }
 
     @Test
+    @DisplayName("the Save, Undo and Redo handlers through E4 injection: enabled when they can act, save is atomic with a .bak")
+    void handlersThroughInjection() throws Exception {
+        org.eclipse.e4.core.contexts.IEclipseContext context = org.eclipse.e4.core.contexts.EclipseContextFactory.create();
+        CurrentNotebook current = new CurrentNotebook();
+        context.set(CurrentNotebook.class, current);
+        context.set(org.eclipse.e4.ui.services.IServiceConstants.ACTIVE_SHELL, shell);
+        Object save = new NotebookHandlers.Save();
+        Object undo = new NotebookHandlers.Undo();
+        Object redo = new NotebookHandlers.Redo();
+        assertEquals(Boolean.FALSE, canExecute(save, context)); // nothing open yet
+        current.open(document);
+        assertEquals(Boolean.FALSE, canExecute(save, context)); // open but unchanged
+        assertEquals(Boolean.FALSE, canExecute(undo, context));
+
+        part.select(channel("housing Z"));
+        Text rate = findAll(shell, Text.class).get(0);
+        rate.setText("51200");
+        rate.notifyListeners(SWT.DefaultSelection, new Event());
+        assertEquals(Boolean.TRUE, canExecute(undo, context));
+        org.eclipse.e4.core.contexts.ContextInjectionFactory.invoke(undo, org.eclipse.e4.core.di.annotations.Execute.class, context);
+        assertEquals("12.8 kHz", figures().get("Nyquist frequency"));
+        assertEquals(Boolean.TRUE, canExecute(redo, context));
+        org.eclipse.e4.core.contexts.ContextInjectionFactory.invoke(redo, org.eclipse.e4.core.di.annotations.Execute.class, context);
+        assertEquals("25.6 kHz", figures().get("Nyquist frequency"));
+
+        byte[] before = java.nio.file.Files.readAllBytes(document.file());
+        assertEquals(Boolean.TRUE, canExecute(save, context));
+        org.eclipse.e4.core.contexts.ContextInjectionFactory.invoke(save, org.eclipse.e4.core.di.annotations.Execute.class, context);
+        assertFalse(document.isDirty());
+        assertEquals(Boolean.FALSE, canExecute(save, context));
+        Path backup = org.foldbook.model.persistence.NotebookStore.backupOf(document.file());
+        assertTrue(java.util.Arrays.equals(before, java.nio.file.Files.readAllBytes(backup)), "the .bak is the previous file");
+        NotebookDocument reread = NotebookDocument.load(document.file());
+        try {
+            SignalChain chain = reread.notebook().getRigs().get(0).getChains().get(0);
+            assertEquals(51200.0, org.foldbook.model.derived.ChainFigures.samplingRateHz(chain));
+        } finally {
+            reread.dispose();
+        }
+        context.dispose();
+    }
+
+    private static Object canExecute(Object handler, org.eclipse.e4.core.contexts.IEclipseContext context) {
+        return org.eclipse.e4.core.contexts.ContextInjectionFactory.invoke(handler,
+                org.eclipse.e4.core.di.annotations.CanExecute.class, context, Boolean.FALSE);
+    }
+
+    @Test
     @DisplayName("a truncated notebook file: the job reports file, line and problem, and leaves the file as it was")
     void damagedFileIsReportedAndKept() throws Exception {
         Path damaged = folder.resolve("damaged.foldbook");
