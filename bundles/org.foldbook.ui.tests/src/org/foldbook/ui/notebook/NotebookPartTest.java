@@ -128,6 +128,23 @@ class NotebookPartTest {
     }
 
     @Test
+    @DisplayName("a recording shows its logged SHA-256 and rate; the rig its validity and safety notes")
+    void otherObjectsShowTheirFacts() throws Exception {
+        org.foldbook.model.Recording recording = document.notebook().getExperiments().get(0).getRecordings().get(0);
+        part.select(recording);
+        Map<String, String> rows = figures();
+        String sha = java.util.HexFormat.of().formatHex(java.security.MessageDigest.getInstance("SHA-256")
+                .digest(java.nio.file.Files.readAllBytes(folder.resolve("data/vibration-run1.wav")))); // FIPS 180-4, JDK
+        assertEquals(sha, rows.get("SHA-256 logged"));
+        assertEquals("25.6 kS/s", rows.get("Declared rate"));
+        assertEquals("2", rows.get("Channels"));
+        part.select(document.notebook().getRigs().get(0));
+        rows = figures();
+        assertEquals("2026-03-01", rows.get("Valid from"));
+        assertTrue(rows.get("Notes").contains("guards closed"), rows.get("Notes"));
+    }
+
+    @Test
     @DisplayName("the findings list the bypassed filter; double-click selects its chain")
     void findingsListed() {
         Table findings = findingsTable();

@@ -311,7 +311,7 @@ public class NotebookPart {
 
     private void showDetails(Object element) {
         SignalChain chain = null;
-        String heading = "Select a chain or a channel to see its figures.";
+        String heading = "Select a chain or a channel to see its figures; other entries show their facts.";
         if (element instanceof SignalChain c) {
             chain = c;
             heading = "Chain: " + NotebookTree.shortName(c);
@@ -332,19 +332,15 @@ public class NotebookPart {
             chainPath.setText("");
             settings.setVisible(false);
             plot.setRanges(null, null);
+            if (element instanceof org.eclipse.emf.ecore.EObject object) {
+                title.setText(NotebookTree.kindOf(object) + ": " + NotebookTree.name(object));
+                fill(ObjectSummary.rows(object));
+            }
             title.getParent().layout(true, true);
             return;
         }
         chainPath.setText(ChainSummary.path(chain));
-        for (ChainSummary.Row row : ChainSummary.rows(chain)) {
-            TableItem item = new TableItem(figures, SWT.NONE);
-            item.setText(new String[] { row.figure(), row.value() });
-        }
-        for (TableColumn column : figures.getColumns()) {
-            int width = column.getWidth();
-            column.pack();
-            column.setWidth(Math.max(width, column.getWidth()));
-        }
+        fill(ChainSummary.rows(chain));
         Stage sampler = ChainFigures.samplingStage(chain);
         Stage filter = ChainFigures.filterStage(chain);
         settings.setVisible(sampler != null);
@@ -353,6 +349,18 @@ public class NotebookPart {
         cutoffField.setText(filter == null ? "" : ChainSummary.plain(ChainFigures.effectiveCutoffHz(filter)));
         drawResponse(chain);
         title.getParent().layout(true, true);
+    }
+
+    private void fill(List<ChainSummary.Row> rows) {
+        for (ChainSummary.Row row : rows) {
+            TableItem item = new TableItem(figures, SWT.NONE);
+            item.setText(new String[] { row.figure(), row.value() });
+        }
+        for (TableColumn column : figures.getColumns()) {
+            int width = column.getWidth();
+            column.pack();
+            column.setWidth(Math.max(width, column.getWidth()));
+        }
     }
 
     /** |H(f)| of the chain in dB, the part that folds drawn apart, the Nyquist line and the need. */

@@ -187,6 +187,15 @@ final class NotebookTree implements ITreeContentProvider {
         return "";
     }
 
+    /** "Device", "Rig", "Experiment", "Recording", "Notebook" for the details' heading. */
+    static String kindOf(EObject object) {
+        if (object instanceof Device device) {
+            String kind = kind(device);
+            return Character.toUpperCase(kind.charAt(0)) + kind.substring(1);
+        }
+        return object.eClass().getName();
+    }
+
     static String kind(Device device) {
         return switch (device.eClass().getName()) {
             case "AntiAliasFilter" -> "anti-alias filter";
