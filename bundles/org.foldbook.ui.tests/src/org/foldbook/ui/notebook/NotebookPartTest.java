@@ -165,7 +165,7 @@ class NotebookPartTest {
 
     @Test
     @DisplayName("changing the rate is a command: figures follow, undo and redo restore, the notebook is dirty")
-    void editUndoRedo() {
+    void editUndoRedo() throws IOException {
         part.select(channel("housing Z"));
         Text rate = findAll(shell, Text.class).get(0);
         rate.setText("51200");
@@ -177,6 +177,10 @@ class NotebookPartTest {
         assertFalse(document.isDirty());
         document.redo();
         assertEquals("25.6 kHz", figures().get("Nyquist frequency"));
+
+        part.persist(); // what the workbench calls when it saves the part
+        assertFalse(document.isDirty());
+        assertTrue(java.nio.file.Files.readString(document.file()).contains("51200"), "the saved file holds the new rate");
 
         rate.setText("fast");
         rate.notifyListeners(SWT.DefaultSelection, new Event());

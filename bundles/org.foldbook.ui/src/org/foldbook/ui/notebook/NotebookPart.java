@@ -535,6 +535,28 @@ public class NotebookPart {
         }
     }
 
+    /**
+     * Called by the workbench when it saves the part (its own save prompt when a window with unsaved
+     * changes closes): an atomic save, or an error dialog that keeps the changes open.
+     */
+    @org.eclipse.e4.ui.di.Persist
+    public void persist() {
+        if (document == null || !document.isDirty()) {
+            return;
+        }
+        try {
+            document.save();
+        } catch (java.io.IOException | RuntimeException e) {
+            org.eclipse.jface.dialogs.MessageDialog.openError(fileLabel.getShell(), "Cannot save the notebook",
+                    document.file() + ": " + e.getMessage() + "\n\nThe file on disk is unchanged.");
+        }
+        if (current != null) {
+            current.saved();
+        } else {
+            updateFileLabel();
+        }
+    }
+
     /** The open document (tests and handlers). */
     public NotebookDocument document() {
         return document;
