@@ -186,13 +186,13 @@ public final class GearboxDemo {
         sound.getStages().add(stage(microphone));
         sound.getStages().add(samplerStage(soundCard, SOUND_RATE_HZ, 2.0));
 
-        SignalChain video = chain("CH-CAM", "shaft mark camera");
+        SignalChain shaftCamera = chain("CH-CAM", "shaft mark camera");
         Stage frames = stage(camera);
         frames.setRateHz(FRAME_RATE_HZ);
         frames.setExposureS(0.0008);
-        video.getStages().add(frames);
+        shaftCamera.getStages().add(frames);
 
-        rig.getChains().addAll(List.of(housing, bearing, sound, video));
+        rig.getChains().addAll(List.of(housing, bearing, sound, shaftCamera));
         notebook.getRigs().add(rig);
 
         Experiment run = f.createExperiment();
@@ -218,7 +218,7 @@ public final class GearboxDemo {
         strobe.setRig(rig);
         Recording mark = recording("REC-CAM", "shaft-mark-run2.wav", FRAME_RATE_HZ, 1);
         strobe.getRecordings().add(mark);
-        strobe.getChannels().add(channel("mark brightness", video, mark, 0, "brightness", "1"));
+        strobe.getChannels().add(channel("mark brightness", shaftCamera, mark, 0, "brightness", "1"));
 
         notebook.getExperiments().addAll(List.of(run, strobe));
         return notebook;
