@@ -9,7 +9,7 @@ import org.foldbook.dsp.Check;
  * {@code y = b0·x + s1; s1 = b1·x − a1·y + s2; s2 = b2·x − a2·y}.
  *
  * <p>Not thread-safe: one instance per stream. No allocation while filtering; a block is processed in
- * chunks of 1024 samples, each chunk passing through the sections two at a time with their
+ * chunks of 1024 samples, each chunk passing through the sections two or three at a time with their
  * coefficients and state in locals, so the data stays in cache and two independent recurrences
  * overlap in the CPU. The arithmetic per section is the same as one section at a time.
  * Non-finite input is rejected before anything is written.
@@ -102,21 +102,28 @@ public final class SosFilter {
             }
         }
         // Cache-sized chunks, each through all sections in turn: the chunk stays in L1 between
-        // passes. Each pass runs two sections at once: every section's recurrence is a chain of
-        // dependent multiply-adds, and two independent chains in one loop keep the CPU twice as busy.
+        // passes. Each pass runs two or three sections at once: every section's recurrence is a chain
+        // of dependent multiply-adds, and independent chains in one loop keep the CPU busier.
         for (int start = 0; start < length; start += CHUNK) {
             int n = Math.min(CHUNK, length - start);
             double[] src = in;
             int srcOff = inOffset + start;
             int dstOff = outOffset + start;
             int s = 0;
-            for (; s + 1 < sections; s += 2) {
-                runPair(s, src, srcOff, out, dstOff, n);
+            while (s < sections) {
+                int left = sections - s;
+                if (left == 1) {
+                    runSingle(s, src, srcOff, out, dstOff, n);
+                    s += 1;
+                } else if (left == 2 || left == 4) {
+                    runPair(s, src, srcOff, out, dstOff, n);
+                    s += 2;
+                } else {
+                    runTriple(s, src, srcOff, out, dstOff, n);
+                    s += 3;
+                }
                 src = out;
                 srcOff = dstOff;
-            }
-            if (s < sections) {
-                runSingle(s, src, srcOff, out, dstOff, n);
             }
         }
     }
@@ -173,6 +180,50 @@ public final class SosFilter {
         state[2 * s + 1] = flush(s2);
         state[2 * s + 2] = flush(t1);
         state[2 * s + 3] = flush(t2);
+    }
+
+    private void runTriple(int s, double[] src, int srcOff, double[] out, int dstOff, int n) {
+        int o = 6 * s;
+        final double b0 = c[o];
+        final double b1 = c[o + 1];
+        final double b2 = c[o + 2];
+        final double a1 = c[o + 4];
+        final double a2 = c[o + 5];
+        final double d0 = c[o + 6];
+        final double d1 = c[o + 7];
+        final double d2 = c[o + 8];
+        final double e1 = c[o + 10];
+        final double e2 = c[o + 11];
+        final double g0 = c[o + 12];
+        final double g1 = c[o + 13];
+        final double g2 = c[o + 14];
+        final double h1 = c[o + 16];
+        final double h2 = c[o + 17];
+        double s1 = state[2 * s];
+        double s2 = state[2 * s + 1];
+        double t1 = state[2 * s + 2];
+        double t2 = state[2 * s + 3];
+        double u1 = state[2 * s + 4];
+        double u2 = state[2 * s + 5];
+        for (int i = 0; i < n; i++) {
+            double x = src[srcOff + i];
+            double y = b0 * x + s1;
+            s1 = b1 * x - a1 * y + s2;
+            s2 = b2 * x - a2 * y;
+            double z = d0 * y + t1;
+            t1 = d1 * y - e1 * z + t2;
+            t2 = d2 * y - e2 * z;
+            double w = g0 * z + u1;
+            u1 = g1 * z - h1 * w + u2;
+            u2 = g2 * z - h2 * w;
+            out[dstOff + i] = w;
+        }
+        state[2 * s] = flush(s1);
+        state[2 * s + 1] = flush(s2);
+        state[2 * s + 2] = flush(t1);
+        state[2 * s + 3] = flush(t2);
+        state[2 * s + 4] = flush(u1);
+        state[2 * s + 5] = flush(u2);
     }
 
     private static double flush(double v) {
