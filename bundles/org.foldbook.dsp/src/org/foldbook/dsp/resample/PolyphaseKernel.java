@@ -265,28 +265,32 @@ final class PolyphaseKernel {
         }
     }
 
-    // Any tap count (the filtered re-samplers): four running sums, the remainder into the first.
+    // Any other tap count (the filtered re-samplers): eight running sums, the remainder into the first.
     private void runAny(double[] x, int pos, int p, double[] out, int outOff, int count) {
         final double[] h = table;
         final int n = taps;
-        final int n4 = n & ~3;
+        final int n8 = n & ~7;
         final int u = up;
         final int sw = stepWhole;
         final int sr = stepRest;
         for (int o = outOff, end = outOff + count; o < end; o++) {
             int r = p * n;
-            double s0 = 0, s1 = 0, s2 = 0, s3 = 0;
+            double s0 = 0, s1 = 0, s2 = 0, s3 = 0, s4 = 0, s5 = 0, s6 = 0, s7 = 0;
             int i = 0;
-            for (; i < n4; i += 4) {
+            for (; i < n8; i += 8) {
                 s0 += x[pos + i] * h[r + i];
                 s1 += x[pos + i + 1] * h[r + i + 1];
                 s2 += x[pos + i + 2] * h[r + i + 2];
                 s3 += x[pos + i + 3] * h[r + i + 3];
+                s4 += x[pos + i + 4] * h[r + i + 4];
+                s5 += x[pos + i + 5] * h[r + i + 5];
+                s6 += x[pos + i + 6] * h[r + i + 6];
+                s7 += x[pos + i + 7] * h[r + i + 7];
             }
             for (; i < n; i++) {
                 s0 += x[pos + i] * h[r + i];
             }
-            out[o] = (s0 + s1) + (s2 + s3);
+            out[o] = ((s0 + s1) + (s2 + s3)) + ((s4 + s5) + (s6 + s7));
             pos += sw;
             p += sr;
             if (p >= u) {
