@@ -147,6 +147,33 @@ class AliasAnalysisTest {
     }
 
     @Test
+    @DisplayName("ChainFigures with a stated dynamic range: 110 dB and −30 dBFS content need 80 dB; Butterworth 4 at 10 kHz, 25.6 kS/s")
+    void chainFiguresOfDynamicRange() {
+        AnalogFilter bw = AnalogLowPass.butterworth(4, 10_000);
+        ChainFigures c = ChainFigures.ofDynamicRange(32_000, bw, 24, 25_600, 110, -30);
+        assertEquals(80, c.requiredAttenuationDb(), 0); // alias of −30 dBFS content must lie 110 dB under full scale
+        // Butterworth |H|² = 1/(1 + (f/fc)^2n) (any filter handbook): at fs/2 = 12.8 kHz, 10·log10(1 + 1.28^8)
+        // = 10·log10(8.20576) = 9.141 dB, worked by hand
+        assertEquals(9.141, c.attenuationAtNyquistDb(), 1e-3);
+        assertEquals(9.141 - 80, c.marginDb(), 1e-3);
+        // 25.6 kHz lies inside the sensor's range and folds onto 0 Hz under-attenuated: no alias-free band
+        assertEquals(0, c.aliasFreeBandHz(), 0);
+        assertEquals(25_600, c.limitingSourceHz(), 0);
+        // the dynamic-range entry with the ideal quantiser's SNR is the ideal-quantiser entry (Kester MT-001)
+        double snr16 = new IdealQuantiser(16, 1.0).snrDb();
+        ChainFigures viaRange = ChainFigures.ofDynamicRange(100_000, bw, 16, 51_200, snr16, -20);
+        ChainFigures viaQuantiser = ChainFigures.of(100_000, bw, new IdealQuantiser(16, 1.0), 51_200, -20,
+                AliasCriterion.BELOW_NOISE_FLOOR);
+        assertEquals(viaQuantiser, viaRange);
+        assertEquals(6.02 * 16 + 1.76 - 20, viaRange.requiredAttenuationDb(), 0.015);
+        // content already below the floor needs nothing
+        assertEquals(0, ChainFigures.requiredAttenuationDb(100, -120), 0);
+        assertMessage(() -> ChainFigures.requiredAttenuationDb(0, -30), "dynamicRangeDb", "0.0");
+        assertMessage(() -> ChainFigures.requiredAttenuationDb(110, Double.NaN), "toneLevelDbfs", "NaN");
+        assertMessage(() -> ChainFigures.ofDynamicRange(32_000, bw, 33, 25_600, 110, -30), "bits", "33");
+    }
+
+    @Test
     @DisplayName("bad input names the parameter and the value")
     void badInput() {
         AnalogFilter bw = AnalogLowPass.butterworth(4, 1000);

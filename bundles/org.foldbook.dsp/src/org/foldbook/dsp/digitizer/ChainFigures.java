@@ -1,5 +1,6 @@
 package org.foldbook.dsp.digitizer;
 
+import org.foldbook.dsp.Check;
 import org.foldbook.dsp.filter.FrequencyResponse;
 
 /**
@@ -35,11 +36,43 @@ public record ChainFigures(double sensorMaxHz, double sampleRateHz, int bits, do
         if (quantiser == null) {
             throw new IllegalArgumentException("quantiser must not be null");
         }
-        double required = quantiser.requiredAttenuationDb(toneLevelDbfs, criterion);
+        return from(sensorMaxHz, chain, quantiser.bits(), sampleRateHz,
+                quantiser.requiredAttenuationDb(toneLevelDbfs, criterion));
+    }
+
+    /**
+     * Figures for a digitizer of a stated dynamic range (the maker's specified full-scale-to-noise
+     * ratio, which for real converters lies well below the ideal 6.02·N + 1.76 dB) and a stated level of
+     * the strongest out-of-band content: its alias must fall below that noise floor, see
+     * {@link #requiredAttenuationDb(double, double)}.
+     *
+     * @param bits           the resolution, 1..32 (reported only)
+     * @param dynamicRangeDb full scale over the noise floor, dB, &gt; 0
+     * @param toneLevelDbfs  the strongest content above Nyquist, dBFS (0 = a full-scale tone)
+     */
+    public static ChainFigures ofDynamicRange(double sensorMaxHz, FrequencyResponse chain, int bits,
+            double sampleRateHz, double dynamicRangeDb, double toneLevelDbfs) {
+        new IdealQuantiser(bits, 1.0); // checks bits
+        return from(sensorMaxHz, chain, bits, sampleRateHz, requiredAttenuationDb(dynamicRangeDb, toneLevelDbfs));
+    }
+
+    /**
+     * The attenuation (dB, ≥ 0) content at {@code toneLevelDbfs} needs so that its alias lies below a
+     * noise floor {@code dynamicRangeDb} under full scale: max(0, dynamicRangeDb + toneLevelDbfs). E.g.
+     * 110 dB range and −30 dBFS content need 80 dB.
+     */
+    public static double requiredAttenuationDb(double dynamicRangeDb, double toneLevelDbfs) {
+        Check.positive("dynamicRangeDb", dynamicRangeDb);
+        Check.finite("toneLevelDbfs", toneLevelDbfs);
+        return Math.max(0, dynamicRangeDb + toneLevelDbfs);
+    }
+
+    private static ChainFigures from(double sensorMaxHz, FrequencyResponse chain, int bits, double sampleRateHz,
+            double required) {
         AliasAnalysis a = AliasAnalysis.of(chain, sensorMaxHz, required);
         AliasFreeBand band = a.aliasFreeBand(sampleRateHz);
         ProtectionMargin m = a.protectionMargin(sampleRateHz, 0.5 * sampleRateHz);
-        return new ChainFigures(sensorMaxHz, sampleRateHz, quantiser.bits(), 0.5 * sampleRateHz, required,
+        return new ChainFigures(sensorMaxHz, sampleRateHz, bits, 0.5 * sampleRateHz, required,
                 band.bandHz(), band.limitingSourceHz(), m.attenuationAtNyquistDb(), m.marginDb());
     }
 }
