@@ -21,6 +21,7 @@ import org.eclipse.emf.common.util.EList;
  *   <li>{@link org.foldbook.model.Digitizer#getPassbandFraction <em>Passband Fraction</em>}</li>
  *   <li>{@link org.foldbook.model.Digitizer#getStopbandFraction <em>Stopband Fraction</em>}</li>
  *   <li>{@link org.foldbook.model.Digitizer#getStopbandAttenuationDb <em>Stopband Attenuation Db</em>}</li>
+ *   <li>{@link org.foldbook.model.Digitizer#getDynamicRangeDb <em>Dynamic Range Db</em>}</li>
  * </ul>
  *
  * @see org.foldbook.model.NotebookPackage#getDigitizer()
@@ -183,5 +184,30 @@ public interface Digitizer extends Device {
 	 * @generated
 	 */
 	void setStopbandAttenuationDb(Double value);
+
+	/**
+	 * Returns the value of the '<em><b>Dynamic Range Db</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Dynamic range (or SNR) from the maker's specification, in dB: full scale over the noise floor. Unset means the ideal quantiser figure 6.02·N + 1.76 dB of its resolution.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Dynamic Range Db</em>' attribute.
+	 * @see #setDynamicRangeDb(Double)
+	 * @see org.foldbook.model.NotebookPackage#getDigitizer_DynamicRangeDb()
+	 * @model
+	 * @generated
+	 */
+	Double getDynamicRangeDb();
+
+	/**
+	 * Sets the value of the '{@link org.foldbook.model.Digitizer#getDynamicRangeDb <em>Dynamic Range Db</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Dynamic Range Db</em>' attribute.
+	 * @see #getDynamicRangeDb()
+	 * @generated
+	 */
+	void setDynamicRangeDb(Double value);
 
 } // Digitizer

@@ -690,13 +690,22 @@ public interface NotebookPackage extends EPackage {
 	int DIGITIZER__STOPBAND_ATTENUATION_DB = DEVICE_FEATURE_COUNT + 6;
 
 	/**
+	 * The feature id for the '<em><b>Dynamic Range Db</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int DIGITIZER__DYNAMIC_RANGE_DB = DEVICE_FEATURE_COUNT + 7;
+
+	/**
 	 * The number of structural features of the '<em>Digitizer</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int DIGITIZER_FEATURE_COUNT = DEVICE_FEATURE_COUNT + 7;
+	int DIGITIZER_FEATURE_COUNT = DEVICE_FEATURE_COUNT + 8;
 
 	/**
 	 * The number of operations of the '<em>Digitizer</em>' class.
@@ -918,13 +927,22 @@ public interface NotebookPackage extends EPackage {
 	int SIGNAL_CHAIN__STAGES = 2;
 
 	/**
+	 * The feature id for the '<em><b>Out Of Band Level Dbfs</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SIGNAL_CHAIN__OUT_OF_BAND_LEVEL_DBFS = 3;
+
+	/**
 	 * The number of structural features of the '<em>Signal Chain</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int SIGNAL_CHAIN_FEATURE_COUNT = 3;
+	int SIGNAL_CHAIN_FEATURE_COUNT = 4;
 
 	/**
 	 * The operation id for the '<em>Sampling Stage</em>' operation.
@@ -1892,6 +1910,17 @@ public interface NotebookPackage extends EPackage {
 	EAttribute getDigitizer_StopbandAttenuationDb();
 
 	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.Digitizer#getDynamicRangeDb <em>Dynamic Range Db</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Dynamic Range Db</em>'.
+	 * @see org.foldbook.model.Digitizer#getDynamicRangeDb()
+	 * @see #getDigitizer()
+	 * @generated
+	 */
+	EAttribute getDigitizer_DynamicRangeDb();
+
+	/**
 	 * Returns the meta object for class '{@link org.foldbook.model.Camera <em>Camera</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -2041,6 +2070,17 @@ public interface NotebookPackage extends EPackage {
 	 * @generated
 	 */
 	EReference getSignalChain_Stages();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.SignalChain#getOutOfBandLevelDbfs <em>Out Of Band Level Dbfs</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Out Of Band Level Dbfs</em>'.
+	 * @see org.foldbook.model.SignalChain#getOutOfBandLevelDbfs()
+	 * @see #getSignalChain()
+	 * @generated
+	 */
+	EAttribute getSignalChain_OutOfBandLevelDbfs();
 
 	/**
 	 * Returns the meta object for the '{@link org.foldbook.model.SignalChain#samplingStage() <em>Sampling Stage</em>}' operation.
@@ -2905,6 +2945,14 @@ public interface NotebookPackage extends EPackage {
 		EAttribute DIGITIZER__STOPBAND_ATTENUATION_DB = eINSTANCE.getDigitizer_StopbandAttenuationDb();
 
 		/**
+		 * The meta object literal for the '<em><b>Dynamic Range Db</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute DIGITIZER__DYNAMIC_RANGE_DB = eINSTANCE.getDigitizer_DynamicRangeDb();
+
+		/**
 		 * The meta object literal for the '{@link org.foldbook.model.impl.CameraImpl <em>Camera</em>}' class.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -3021,6 +3069,14 @@ public interface NotebookPackage extends EPackage {
 		 * @generated
 		 */
 		EReference SIGNAL_CHAIN__STAGES = eINSTANCE.getSignalChain_Stages();
+
+		/**
+		 * The meta object literal for the '<em><b>Out Of Band Level Dbfs</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SIGNAL_CHAIN__OUT_OF_BAND_LEVEL_DBFS = eINSTANCE.getSignalChain_OutOfBandLevelDbfs();
 
 		/**
 		 * The meta object literal for the '<em><b>Sampling Stage</b></em>' operation.

@@ -19,10 +19,11 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link org.foldbook.model.SignalChain#getId <em>Id</em>}</li>
  *   <li>{@link org.foldbook.model.SignalChain#getName <em>Name</em>}</li>
  *   <li>{@link org.foldbook.model.SignalChain#getStages <em>Stages</em>}</li>
+ *   <li>{@link org.foldbook.model.SignalChain#getOutOfBandLevelDbfs <em>Out Of Band Level Dbfs</em>}</li>
  * </ul>
  *
  * @see org.foldbook.model.NotebookPackage#getSignalChain()
- * @model annotation="http://www.eclipse.org/emf/2002/Ecore constraints='hasSamplingStage filterCutoffBelowNyquist sensorBandProtected exposureFitsFramePeriod'"
+ * @model annotation="http://www.eclipse.org/emf/2002/Ecore constraints='hasSamplingStage filterCutoffBelowNyquist sensorBandProtected protectionMeetsNeed exposureFitsFramePeriod'"
  * @generated
  */
 public interface SignalChain extends EObject {
@@ -84,6 +85,31 @@ public interface SignalChain extends EObject {
 	 * @generated
 	 */
 	EList<Stage> getStages();
+
+	/**
+	 * Returns the value of the '<em><b>Out Of Band Level Dbfs</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Level of the strongest content expected above the Nyquist frequency at the digitizer's input before any filtering, in dBFS (e.g. a sensor resonance's ringing as measured). Unset means 0 dBFS, the worst case.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Out Of Band Level Dbfs</em>' attribute.
+	 * @see #setOutOfBandLevelDbfs(Double)
+	 * @see org.foldbook.model.NotebookPackage#getSignalChain_OutOfBandLevelDbfs()
+	 * @model
+	 * @generated
+	 */
+	Double getOutOfBandLevelDbfs();
+
+	/**
+	 * Sets the value of the '{@link org.foldbook.model.SignalChain#getOutOfBandLevelDbfs <em>Out Of Band Level Dbfs</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Out Of Band Level Dbfs</em>' attribute.
+	 * @see #getOutOfBandLevelDbfs()
+	 * @generated
+	 */
+	void setOutOfBandLevelDbfs(Double value);
 
 	/**
 	 * <!-- begin-user-doc -->

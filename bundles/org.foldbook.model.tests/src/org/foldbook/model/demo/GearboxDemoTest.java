@@ -22,6 +22,7 @@ import org.foldbook.model.Experiment;
 import org.foldbook.model.Notebook;
 import org.foldbook.model.Recording;
 import org.foldbook.model.SignalChain;
+import org.foldbook.model.derived.ChainFigures;
 import org.foldbook.model.persistence.NotebookStore;
 import org.foldbook.model.persistence.RecordingFiles;
 import org.foldbook.model.util.NotebookValidator;
@@ -72,20 +73,76 @@ class GearboxDemoTest {
     }
 
     @Test
-    @DisplayName("validation finds exactly the bypassed filter: 32 kHz content folds anywhere into 0–12.8 kHz")
-    void validationFindsOnlyTheBypassedFilter() {
+    @DisplayName("validation finds exactly the two intended problems: housing Z filtered but short of 80 dB, bearing Z bypassed")
+    void validationFindsTheIntendedProblems() {
         List<Diagnostic> findings = findings(notebook);
-        assertEquals(1, findings.size(), findings.toString());
-        Diagnostic d = findings.get(0);
-        assertEquals(NotebookValidator.DIAGNOSTIC_SOURCE, d.getSource());
-        assertEquals(Findings.UNPROTECTED_BAND_FOLDS, d.getCode());
-        assertEquals(Diagnostic.WARNING, d.getSeverity());
-        assertEquals("CH-BZ", ((SignalChain) d.getData().get(0)).getId());
+        assertEquals(2, findings.size(), findings.toString());
+        for (Diagnostic d : findings) {
+            assertEquals(NotebookValidator.DIAGNOSTIC_SOURCE, d.getSource());
+            assertEquals(Diagnostic.WARNING, d.getSeverity());
+        }
+        Diagnostic short_ = findings.get(0);
+        assertEquals(Findings.PROTECTION_SHORT_OF_NEED, short_.getCode());
+        assertEquals("CH-HZ", ((SignalChain) short_.getData().get(0)).getId());
+        // need 110 dB range − 30 dBFS = 80 dB; Butterworth 4 at 10 kHz gives 10·log10(1 + 1.28^8) = 9.1 dB at
+        // fs/2 = 12.8 kHz (|H|² = 1/(1+(f/fc)^2n), hand-computed), margin 9.1 − 80 = −70.9 dB
+        String m = short_.getMessage();
+        for (String part : new String[] { "as little as 9.1 dB", "80.0 dB is needed", "110.0 dB dynamic range",
+                "-30.0 dBFS out-of-band content", "protection margin -70.9 dB", "alias-free band none" }) {
+            assertTrue(m.contains(part), "'" + part + "' in: " + m);
+        }
+        // 25.6 kHz is inside the front end's 32 kHz and folds onto 0 Hz (sampling theorem); keeping 0–10 kHz
+        // alias-free needs fs − 32 kHz ≥ 10 kHz, i.e. 42 kS/s (worked by hand), under the digitizer's 51.2 kS/s
+        assertEquals(List.of(25600.0, 0.0, 10000.0), frequenciesIn(m), m);
+        assertTrue(m.contains("42.00 kS/s keeps 0 to 10.00 kHz alias-free"), m);
+        assertTrue(m.contains("steeper filter or a lower cutoff, or sample faster"), m);
+
+        Diagnostic bypassed = findings.get(1);
+        assertEquals(Findings.UNPROTECTED_BAND_FOLDS, bypassed.getCode());
+        assertEquals("CH-BZ", ((SignalChain) bypassed.getData().get(0)).getId());
         // fs = 25.6 kS/s, front end to max(20 kHz, resonance 32 kHz) = 32 kHz ≥ fs, so the images cover
         // all of [0, fs/2] = [0, 12.8 kHz] (sampling theorem, worked by hand)
         // the message's frequencies, in order: front end upper, band from, band to, lands from, lands to, rate
-        List<Double> hz = frequenciesIn(d.getMessage());
-        assertEquals(List.of(32000.0, 12800.0, 32000.0, 0.0, 12800.0, 25600.0), hz.subList(0, 6), d.getMessage());
+        List<Double> hz = frequenciesIn(bypassed.getMessage());
+        assertEquals(List.of(32000.0, 12800.0, 32000.0, 0.0, 12800.0, 25600.0), hz.subList(0, 6), bypassed.getMessage());
+    }
+
+    @Test
+    @DisplayName("figures by hand: housing Z needs 80 dB and has 9.1 dB at 12.8 kHz, 15.6 dB at 15.6 kHz; bearing Z has none; the microphone is protected")
+    void figuresMatchHandWorkedValues() {
+        SignalChain housing = chain("CH-HZ");
+        var need = ChainFigures.need(housing).orElseThrow();
+        assertEquals(110, need.dynamicRangeDb(), 0);
+        assertTrue(need.rangeStated() && need.levelStated());
+        assertEquals(-30, need.outOfBandLevelDbfs(), 0);
+        assertEquals(80, need.requiredDb(), 0);
+        var f = ChainFigures.figures(housing).orElseThrow();
+        // Butterworth |H|² = 1/(1+(f/fc)^2n), n = 4, fc = 10 kHz (any filter handbook), hand-computed:
+        // 12.8 kHz: 10·log10(1 + 1.28^8) = 10·log10(8.20576) = 9.1412 dB
+        assertEquals(9.1412, f.attenuationAtNyquistDb(), 1e-4);
+        assertEquals(9.1412 - 80, f.marginDb(), 1e-4);
+        assertEquals(0, f.aliasFreeBandHz(), 0);
+        // 15.6 kHz (= 25.6 − 10 kHz, what folds onto the cutoff): 10·log10(1 + 1.56^8) = 10·log10(36.0749) = 15.572 dB
+        assertEquals(15.572, ChainFigures.chainResponse(housing).attenuationDb(15_600), 1e-3);
+        // 32 kHz resonance: 10·log10(1 + 3.2^8) = 10·log10(10996.1) = 40.412 dB, still 40 dB short of 80
+        assertEquals(40.412, ChainFigures.chainResponse(housing).attenuationDb(32_000), 1e-3);
+        var lowest = ChainFigures.lowestAliasFreeRate(housing, 10_000).orElseThrow();
+        assertTrue(lowest.found());
+        assertEquals(42_000, lowest.rateHz(), 42_000 * 1e-6); // fs − 32 kHz = 10 kHz, by hand
+        assertTrue(lowest.rateHz() >= 42_000 - 1e-9, "the verified end is at or above the boundary");
+
+        var bearing = ChainFigures.figures(chain("CH-BZ")).orElseThrow();
+        assertEquals(80, bearing.requiredAttenuationDb(), 0);
+        assertEquals(-80, bearing.marginDb(), 0); // no filter: |H| = 1, margin 0 − 80 dB
+        assertEquals(0, bearing.aliasFreeBandHz(), 0);
+
+        SignalChain sound = chain("CH-MIC");
+        var micNeed = ChainFigures.need(sound).orElseThrow();
+        assertEquals(105, micNeed.requiredDb(), 0); // 105 dB range + 0 dBFS, the worst case (no level stated)
+        assertTrue(micNeed.rangeStated() && !micNeed.levelStated());
+        var mic = ChainFigures.figures(sound).orElseThrow();
+        assertEquals(Double.POSITIVE_INFINITY, mic.marginDb()); // microphone to 20 kHz < fs/2 = 24 kHz
+        assertEquals(24_000, mic.aliasFreeBandHz(), 0);
     }
 
     @Test
@@ -149,7 +206,7 @@ class GearboxDemoTest {
     }
 
     @Test
-    @DisplayName("vibration tones: mesh passes, the filtered resonance image is 40.4 dB down, the bypassed one is not")
+    @DisplayName("vibration tones: mesh passes, the filtered −30 dBFS resonance image is 40.4 dB down, the bypassed one is not")
     void vibrationTonesFoldWhereTheTheoremSays() throws IOException {
         Recording vibration = recordings(notebook).get(0);
         double[][] x = decode(RecordingFiles.resolve(vibration));
@@ -158,13 +215,14 @@ class GearboxDemoTest {
         assertEquals(0.30, amplitude(x[0], 906.5, fs), 1e-3);
         assertEquals(0.30, amplitude(x[1], 906.5, fs), 1e-3);
         // 32 kHz resonance at 25.6 kS/s appears at 32 − 25.6 = 6.4 kHz (sampling theorem);
-        // filtered: 0.25/√(1+3.2^8) = 0.25/104.86 = 2.384e-3 (Butterworth magnitude, hand-computed)
-        assertEquals(2.384e-3, amplitude(x[0], 6400, fs), 0.05 * 2.384e-3);
-        assertEquals(0.25, amplitude(x[1], 6400, fs), 2e-3);
+        // −30 dBFS = 10^(−1.5) = 0.031623 of full scale; filtered: 0.031623/√(1+3.2^8) = 0.031623/104.86
+        // = 3.016e-4 (Butterworth magnitude, hand-computed; the tolerance covers the 0.002 RMS noise)
+        assertEquals(3.016e-4, amplitude(x[0], 6400, fs), 0.1 * 3.016e-4);
+        assertEquals(0.031623, amplitude(x[1], 6400, fs), 1e-3);
         // 17th mesh harmonic 15 410.5 Hz appears at 25 600 − 15 410.5 = 10 189.5 Hz;
-        // filtered: 0.05/√(1+1.54105^8) = 0.05/5.728 = 8.729e-3
-        assertEquals(8.729e-3, amplitude(x[0], 10189.5, fs), 0.02 * 8.729e-3);
-        assertEquals(0.05, amplitude(x[1], 10189.5, fs), 1e-3);
+        // filtered: 0.02/√(1+1.54105^8) = 0.02/5.728 = 3.492e-3
+        assertEquals(3.492e-3, amplitude(x[0], 10189.5, fs), 0.03 * 3.492e-3);
+        assertEquals(0.02, amplitude(x[1], 10189.5, fs), 1e-3);
         // nothing at the true frequency's own bin below Nyquist other than noise
         assertTrue(amplitude(x[1], 7000, fs) < 1e-4);
     }
@@ -176,6 +234,35 @@ class GearboxDemoTest {
         assertEquals(0.20, amplitude(x[0], 906.5, 48000), 1e-3);
         // 30 kHz at 48 kS/s would appear at 48 − 30 = 18 kHz; 100 dB down it is 1e-6, below the noise
         assertTrue(amplitude(x[0], 18000, 48000) < 1e-4, "18 kHz image: " + amplitude(x[0], 18000, 48000));
+    }
+
+    @Test
+    @DisplayName("the JDK's javax.sound.sampled WAV reader reads every demo recording: format, length, samples")
+    void jdkAudioSystemReadsTheRecordings() throws Exception {
+        // an outside decoder: the JDK's WaveFileReader parses the RIFF header and finds the data chunk
+        Object[][] expected = { { "REC-VIB", 2, 25600, 24 }, { "REC-MIC", 1, 48000, 24 }, { "REC-CAM", 1, 1000, 16 } };
+        List<Recording> recordings = recordings(notebook);
+        for (int i = 0; i < expected.length; i++) {
+            Path wav = RecordingFiles.resolve(recordings.get(i));
+            try (javax.sound.sampled.AudioInputStream in = javax.sound.sampled.AudioSystem.getAudioInputStream(wav.toFile())) {
+                javax.sound.sampled.AudioFormat format = in.getFormat();
+                assertEquals(javax.sound.sampled.AudioFormat.Encoding.PCM_SIGNED, format.getEncoding(), wav.toString());
+                assertEquals(expected[i][1], format.getChannels());
+                assertEquals((int) expected[i][2], format.getSampleRate(), 0);
+                assertEquals(expected[i][3], format.getSampleSizeInBits());
+                assertTrue(!format.isBigEndian());
+                assertEquals(2L * (int) expected[i][2], in.getFrameLength()); // 2 s
+                byte[] pcm = in.readAllBytes();
+                assertEquals(in.getFrameLength() * format.getFrameSize(), pcm.length);
+                if (i == 0) {
+                    double[][] x = samples(pcm, format.getChannels(), format.getSampleSizeInBits());
+                    // the mesh tone at 906.5 Hz, 0.30 of full scale, in both channels (the demo's scenario)
+                    assertEquals(0.30, amplitude(x[0], 906.5, 25600), 1e-3);
+                    assertEquals(0.30, amplitude(x[1], 906.5, 25600), 1e-3);
+                    assertEquals(0.031623, amplitude(x[1], 6400, 25600), 1e-3); // bypassed −30 dBFS resonance image
+                }
+            }
+        }
     }
 
     @Test
@@ -221,11 +308,19 @@ class GearboxDemoTest {
         ByteBuffer b = ByteBuffer.wrap(Files.readAllBytes(wav)).order(ByteOrder.LITTLE_ENDIAN);
         int channels = b.getShort(22);
         int bits = b.getShort(34);
+        byte[] pcm = new byte[b.getInt(40)];
+        b.get(44, pcm);
+        return samples(pcm, channels, bits);
+    }
+
+    /** Interleaved little-endian signed PCM as full-scale fractions per channel. */
+    private static double[][] samples(byte[] pcm, int channels, int bits) {
+        ByteBuffer b = ByteBuffer.wrap(pcm);
         int bytes = bits / 8;
-        int frames = b.getInt(40) / (channels * bytes);
+        int frames = pcm.length / (channels * bytes);
         double full = (1 << (bits - 1)) - 1;
         double[][] out = new double[channels][frames];
-        int at = 44;
+        int at = 0;
         for (int n = 0; n < frames; n++) {
             for (int c = 0; c < channels; c++) {
                 int v = 0;
@@ -243,6 +338,10 @@ class GearboxDemoTest {
         byte[] t = new byte[4];
         b.get(at, t);
         return new String(t, StandardCharsets.US_ASCII);
+    }
+
+    private SignalChain chain(String id) {
+        return notebook.getRigs().get(0).getChains().stream().filter(c -> id.equals(c.getId())).findFirst().orElseThrow();
     }
 
     private static List<Recording> recordings(Notebook notebook) {

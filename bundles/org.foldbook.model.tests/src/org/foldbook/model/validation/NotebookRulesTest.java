@@ -170,6 +170,51 @@ class NotebookRulesTest {
     }
 
     @Test
+    @DisplayName("filtered but short of the need: 100 dB range − 40 dBFS = 60 dB, Butterworth 4 at 4 kHz gives 31.8 dB at 10 kHz; names 26.50 kS/s")
+    void protectionShortOfNeed() {
+        SignalChain chain = vibrationChain(notebook);
+        Sensor sensor = (Sensor) chain.getStages().get(0).getDevice();
+        Digitizer digitizer = (Digitizer) chain.getStages().get(3).getDevice();
+        sensor.setUsableMaxHz(40000.0);
+        sensor.setResonanceHz(null);
+        digitizer.setDynamicRangeDb(100.0);
+        // no out-of-band level stated: the table shows the worst case, the rule stays quiet
+        assertEquals(List.of(), withCode(Findings.PROTECTION_SHORT_OF_NEED));
+        chain.setOutOfBandLevelDbfs(-40.0);
+        Diagnostic finding = single(Findings.PROTECTION_SHORT_OF_NEED);
+        assertEquals(Diagnostic.WARNING, finding.getSeverity());
+        String m = finding.getMessage();
+        // Butterworth |H|² = 1/(1+(f/fc)^2n): 10·log10(1 + 2.5^8) = 31.84 dB at 10 kHz; margin 31.84 − 60 = −28.2 dB
+        assertTrue(m.contains("as little as 31.8 dB where 60.0 dB is needed (100.0 dB dynamic range + -40.0 dBFS out-of-band content)"), m);
+        assertTrue(m.contains("protection margin -28.2 dB"), m);
+        // 60 dB is reached at 4 kHz·(10^6 − 1)^(1/8) = 22.494 kHz; 0–4 kHz stays clean once fs − 22.494 kHz ≥ 4 kHz,
+        // i.e. fs ≥ 26.494 kS/s (hand-worked), rounded up to 26.50 kS/s
+        assertTrue(m.contains("26.50 kS/s keeps 0 to 4.000 kHz alias-free"), m);
+        // with enough attenuation (content at −80 dBFS needs 20 dB only) the rule is quiet
+        chain.setOutOfBandLevelDbfs(-80.0);
+        assertEquals(List.of(), withCode(Findings.PROTECTION_SHORT_OF_NEED));
+        // an unfiltered chain is the other rule's business
+        chain.setOutOfBandLevelDbfs(-40.0);
+        chain.getStages().remove(2);
+        assertEquals(List.of(), withCode(Findings.PROTECTION_SHORT_OF_NEED));
+        single(Findings.UNPROTECTED_BAND_FOLDS);
+    }
+
+    @Test
+    @DisplayName("no rate up to the digitizer's maximum helps a filter whose cutoff is too high for the need")
+    void protectionShortOfNeedWithoutARate() {
+        SignalChain chain = vibrationChain(notebook);
+        Sensor sensor = (Sensor) chain.getStages().get(0).getDevice();
+        sensor.setUsableMaxHz(200000.0);
+        sensor.setResonanceHz(null);
+        chain.setOutOfBandLevelDbfs(0.0);
+        // 146 dB (ideal 24-bit) at 0 dBFS: Butterworth 4 at 4 kHz reaches it only near 4 kHz·10^(146.26/80) = 270 kHz,
+        // beyond the sensor's 200 kHz: every rate up to 51.2 kS/s leaves 200 kHz content folding under-attenuated
+        String m = single(Findings.PROTECTION_SHORT_OF_NEED).getMessage();
+        assertTrue(m.contains("ideal 24-bit SNR") && m.contains("no rate up to the digitizer's 51.20 kS/s"), m);
+    }
+
+    @Test
     @DisplayName("a chain without digitizer or camera is an error")
     void chainMustSample() {
         SignalChain chain = vibrationChain(notebook);

@@ -33,6 +33,7 @@ import org.foldbook.model.NotebookPackage;
  *   <li>{@link org.foldbook.model.impl.DigitizerImpl#getPassbandFraction <em>Passband Fraction</em>}</li>
  *   <li>{@link org.foldbook.model.impl.DigitizerImpl#getStopbandFraction <em>Stopband Fraction</em>}</li>
  *   <li>{@link org.foldbook.model.impl.DigitizerImpl#getStopbandAttenuationDb <em>Stopband Attenuation Db</em>}</li>
+ *   <li>{@link org.foldbook.model.impl.DigitizerImpl#getDynamicRangeDb <em>Dynamic Range Db</em>}</li>
  * </ul>
  *
  * @generated
@@ -167,6 +168,26 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 	 * @ordered
 	 */
 	protected Double stopbandAttenuationDb = STOPBAND_ATTENUATION_DB_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getDynamicRangeDb() <em>Dynamic Range Db</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getDynamicRangeDb()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final Double DYNAMIC_RANGE_DB_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getDynamicRangeDb() <em>Dynamic Range Db</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getDynamicRangeDb()
+	 * @generated
+	 * @ordered
+	 */
+	protected Double dynamicRangeDb = DYNAMIC_RANGE_DB_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -344,6 +365,29 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 	 * @generated
 	 */
 	@Override
+	public Double getDynamicRangeDb() {
+		return dynamicRangeDb;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setDynamicRangeDb(Double newDynamicRangeDb) {
+		Double oldDynamicRangeDb = dynamicRangeDb;
+		dynamicRangeDb = newDynamicRangeDb;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, NotebookPackage.DIGITIZER__DYNAMIC_RANGE_DB, oldDynamicRangeDb, dynamicRangeDb));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case NotebookPackage.DIGITIZER__RESOLUTION_BITS:
@@ -360,6 +404,8 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 				return getStopbandFraction();
 			case NotebookPackage.DIGITIZER__STOPBAND_ATTENUATION_DB:
 				return getStopbandAttenuationDb();
+			case NotebookPackage.DIGITIZER__DYNAMIC_RANGE_DB:
+				return getDynamicRangeDb();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -395,6 +441,9 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 			case NotebookPackage.DIGITIZER__STOPBAND_ATTENUATION_DB:
 				setStopbandAttenuationDb((Double)newValue);
 				return;
+			case NotebookPackage.DIGITIZER__DYNAMIC_RANGE_DB:
+				setDynamicRangeDb((Double)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -428,6 +477,9 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 			case NotebookPackage.DIGITIZER__STOPBAND_ATTENUATION_DB:
 				setStopbandAttenuationDb(STOPBAND_ATTENUATION_DB_EDEFAULT);
 				return;
+			case NotebookPackage.DIGITIZER__DYNAMIC_RANGE_DB:
+				setDynamicRangeDb(DYNAMIC_RANGE_DB_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -454,6 +506,8 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 				return STOPBAND_FRACTION_EDEFAULT == null ? stopbandFraction != null : !STOPBAND_FRACTION_EDEFAULT.equals(stopbandFraction);
 			case NotebookPackage.DIGITIZER__STOPBAND_ATTENUATION_DB:
 				return STOPBAND_ATTENUATION_DB_EDEFAULT == null ? stopbandAttenuationDb != null : !STOPBAND_ATTENUATION_DB_EDEFAULT.equals(stopbandAttenuationDb);
+			case NotebookPackage.DIGITIZER__DYNAMIC_RANGE_DB:
+				return DYNAMIC_RANGE_DB_EDEFAULT == null ? dynamicRangeDb != null : !DYNAMIC_RANGE_DB_EDEFAULT.equals(dynamicRangeDb);
 		}
 		return super.eIsSet(featureID);
 	}
@@ -482,6 +536,8 @@ public class DigitizerImpl extends DeviceImpl implements Digitizer {
 		result.append(stopbandFraction);
 		result.append(", stopbandAttenuationDb: ");
 		result.append(stopbandAttenuationDb);
+		result.append(", dynamicRangeDb: ");
+		result.append(dynamicRangeDb);
 		result.append(')');
 		return result.toString();
 	}

@@ -643,6 +643,16 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 	 * @generated
 	 */
 	@Override
+	public EAttribute getDigitizer_DynamicRangeDb() {
+		return (EAttribute)digitizerEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EClass getCamera() {
 		return cameraEClass;
 	}
@@ -775,6 +785,16 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 	@Override
 	public EReference getSignalChain_Stages() {
 		return (EReference)signalChainEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getSignalChain_OutOfBandLevelDbfs() {
+		return (EAttribute)signalChainEClass.getEStructuralFeatures().get(3);
 	}
 
 	/**
@@ -1330,6 +1350,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		createEAttribute(digitizerEClass, DIGITIZER__PASSBAND_FRACTION);
 		createEAttribute(digitizerEClass, DIGITIZER__STOPBAND_FRACTION);
 		createEAttribute(digitizerEClass, DIGITIZER__STOPBAND_ATTENUATION_DB);
+		createEAttribute(digitizerEClass, DIGITIZER__DYNAMIC_RANGE_DB);
 
 		cameraEClass = createEClass(CAMERA);
 		createEAttribute(cameraEClass, CAMERA__FRAME_RATES_HZ);
@@ -1347,6 +1368,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		createEAttribute(signalChainEClass, SIGNAL_CHAIN__ID);
 		createEAttribute(signalChainEClass, SIGNAL_CHAIN__NAME);
 		createEReference(signalChainEClass, SIGNAL_CHAIN__STAGES);
+		createEAttribute(signalChainEClass, SIGNAL_CHAIN__OUT_OF_BAND_LEVEL_DBFS);
 		createEOperation(signalChainEClass, SIGNAL_CHAIN___SAMPLING_STAGE);
 		createEOperation(signalChainEClass, SIGNAL_CHAIN___SAMPLING_RATE_HZ);
 		createEOperation(signalChainEClass, SIGNAL_CHAIN___NYQUIST_HZ);
@@ -1483,6 +1505,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		initEAttribute(getDigitizer_PassbandFraction(), ecorePackage.getEDoubleObject(), "passbandFraction", null, 0, 1, Digitizer.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getDigitizer_StopbandFraction(), ecorePackage.getEDoubleObject(), "stopbandFraction", null, 0, 1, Digitizer.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getDigitizer_StopbandAttenuationDb(), ecorePackage.getEDoubleObject(), "stopbandAttenuationDb", null, 0, 1, Digitizer.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getDigitizer_DynamicRangeDb(), ecorePackage.getEDoubleObject(), "dynamicRangeDb", null, 0, 1, Digitizer.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(cameraEClass, Camera.class, "Camera", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getCamera_FrameRatesHz(), ecorePackage.getEDouble(), "frameRatesHz", null, 0, -1, Camera.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -1500,6 +1523,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		initEAttribute(getSignalChain_Id(), ecorePackage.getEString(), "id", null, 0, 1, SignalChain.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getSignalChain_Name(), ecorePackage.getEString(), "name", null, 0, 1, SignalChain.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getSignalChain_Stages(), this.getStage(), null, "stages", null, 0, -1, SignalChain.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getSignalChain_OutOfBandLevelDbfs(), ecorePackage.getEDoubleObject(), "outOfBandLevelDbfs", null, 0, 1, SignalChain.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEOperation(getSignalChain__SamplingStage(), this.getStage(), "samplingStage", 0, 1, IS_UNIQUE, IS_ORDERED);
 
@@ -1622,7 +1646,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		  (signalChainEClass,
 		   source,
 		   new String[] {
-			   "constraints", "hasSamplingStage filterCutoffBelowNyquist sensorBandProtected exposureFitsFramePeriod"
+			   "constraints", "hasSamplingStage filterCutoffBelowNyquist sensorBandProtected protectionMeetsNeed exposureFitsFramePeriod"
 		   });
 		addAnnotation
 		  (stageEClass,

@@ -36,6 +36,7 @@ import org.foldbook.model.Stage;
  *   <li>{@link org.foldbook.model.impl.SignalChainImpl#getId <em>Id</em>}</li>
  *   <li>{@link org.foldbook.model.impl.SignalChainImpl#getName <em>Name</em>}</li>
  *   <li>{@link org.foldbook.model.impl.SignalChainImpl#getStages <em>Stages</em>}</li>
+ *   <li>{@link org.foldbook.model.impl.SignalChainImpl#getOutOfBandLevelDbfs <em>Out Of Band Level Dbfs</em>}</li>
  * </ul>
  *
  * @generated
@@ -90,6 +91,26 @@ public class SignalChainImpl extends MinimalEObjectImpl.Container implements Sig
 	 * @ordered
 	 */
 	protected EList<Stage> stages;
+
+	/**
+	 * The default value of the '{@link #getOutOfBandLevelDbfs() <em>Out Of Band Level Dbfs</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getOutOfBandLevelDbfs()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final Double OUT_OF_BAND_LEVEL_DBFS_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getOutOfBandLevelDbfs() <em>Out Of Band Level Dbfs</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getOutOfBandLevelDbfs()
+	 * @generated
+	 * @ordered
+	 */
+	protected Double outOfBandLevelDbfs = OUT_OF_BAND_LEVEL_DBFS_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -175,6 +196,29 @@ public class SignalChainImpl extends MinimalEObjectImpl.Container implements Sig
 	 * @generated
 	 */
 	@Override
+	public Double getOutOfBandLevelDbfs() {
+		return outOfBandLevelDbfs;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setOutOfBandLevelDbfs(Double newOutOfBandLevelDbfs) {
+		Double oldOutOfBandLevelDbfs = outOfBandLevelDbfs;
+		outOfBandLevelDbfs = newOutOfBandLevelDbfs;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, NotebookPackage.SIGNAL_CHAIN__OUT_OF_BAND_LEVEL_DBFS, oldOutOfBandLevelDbfs, outOfBandLevelDbfs));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Stage samplingStage() {
 		return org.foldbook.model.derived.ChainFigures.samplingStage(this);
 	}
@@ -227,6 +271,8 @@ public class SignalChainImpl extends MinimalEObjectImpl.Container implements Sig
 				return getName();
 			case NotebookPackage.SIGNAL_CHAIN__STAGES:
 				return getStages();
+			case NotebookPackage.SIGNAL_CHAIN__OUT_OF_BAND_LEVEL_DBFS:
+				return getOutOfBandLevelDbfs();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -250,6 +296,9 @@ public class SignalChainImpl extends MinimalEObjectImpl.Container implements Sig
 				getStages().clear();
 				getStages().addAll((Collection<? extends Stage>)newValue);
 				return;
+			case NotebookPackage.SIGNAL_CHAIN__OUT_OF_BAND_LEVEL_DBFS:
+				setOutOfBandLevelDbfs((Double)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -271,6 +320,9 @@ public class SignalChainImpl extends MinimalEObjectImpl.Container implements Sig
 			case NotebookPackage.SIGNAL_CHAIN__STAGES:
 				getStages().clear();
 				return;
+			case NotebookPackage.SIGNAL_CHAIN__OUT_OF_BAND_LEVEL_DBFS:
+				setOutOfBandLevelDbfs(OUT_OF_BAND_LEVEL_DBFS_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -289,6 +341,8 @@ public class SignalChainImpl extends MinimalEObjectImpl.Container implements Sig
 				return NAME_EDEFAULT == null ? name != null : !NAME_EDEFAULT.equals(name);
 			case NotebookPackage.SIGNAL_CHAIN__STAGES:
 				return stages != null && !stages.isEmpty();
+			case NotebookPackage.SIGNAL_CHAIN__OUT_OF_BAND_LEVEL_DBFS:
+				return OUT_OF_BAND_LEVEL_DBFS_EDEFAULT == null ? outOfBandLevelDbfs != null : !OUT_OF_BAND_LEVEL_DBFS_EDEFAULT.equals(outOfBandLevelDbfs);
 		}
 		return super.eIsSet(featureID);
 	}
@@ -325,6 +379,8 @@ public class SignalChainImpl extends MinimalEObjectImpl.Container implements Sig
 		result.append(id);
 		result.append(", name: ");
 		result.append(name);
+		result.append(", outOfBandLevelDbfs: ");
+		result.append(outOfBandLevelDbfs);
 		result.append(')');
 		return result.toString();
 	}

@@ -280,6 +280,7 @@ public class NotebookValidator extends EObjectValidator {
 		if (result || diagnostics != null) result &= validateSignalChain_hasSamplingStage(signalChain, diagnostics, context);
 		if (result || diagnostics != null) result &= validateSignalChain_filterCutoffBelowNyquist(signalChain, diagnostics, context);
 		if (result || diagnostics != null) result &= validateSignalChain_sensorBandProtected(signalChain, diagnostics, context);
+		if (result || diagnostics != null) result &= validateSignalChain_protectionMeetsNeed(signalChain, diagnostics, context);
 		if (result || diagnostics != null) result &= validateSignalChain_exposureFitsFramePeriod(signalChain, diagnostics, context);
 		return result;
 	}
@@ -312,6 +313,16 @@ public class NotebookValidator extends EObjectValidator {
 	 */
 	public boolean validateSignalChain_sensorBandProtected(SignalChain signalChain, DiagnosticChain diagnostics, Map<Object, Object> context) {
 		return org.foldbook.model.validation.ChainRules.sensorBandProtected(signalChain, diagnostics, context);
+	}
+
+	/**
+	 * Validates the protectionMeetsNeed constraint of '<em>Signal Chain</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated NOT
+	 */
+	public boolean validateSignalChain_protectionMeetsNeed(SignalChain signalChain, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return org.foldbook.model.validation.ChainRules.protectionMeetsNeed(signalChain, diagnostics, context);
 	}
 
 	/**

@@ -35,11 +35,15 @@ import org.foldbook.model.persistence.RecordingFiles;
  * The demo notebook: a SYNTHETIC gearbox test stand made up for Foldbook (devices, serials, dates
  * and signals are invented; no real lab, product or data sheet). One rig with four chains:
  * <ol>
- * <li>housing accelerometer (flat to 20 kHz, mounted resonance 32 kHz) → charge amplifier →
- * 4th-order Butterworth low-pass at 10 kHz → 24-bit digitizer at 25.6 kS/s;</li>
+ * <li>housing accelerometer (flat to 20 kHz, mounted resonance 32 kHz, its ringing reaching the
+ * digitizer at −30 dBFS) → charge amplifier → 4th-order Butterworth low-pass at 10 kHz → 24-bit
+ * digitizer (110 dB dynamic range) at 25.6 kS/s. Filtered, but not enough: aliases must stay 80 dB
+ * down (110 dB − 30 dB) and the filter gives 9.1 dB at 12.8 kHz, about 16 dB at 15.6 kHz (the image
+ * of the cutoff); the validation says so and names the rate that would do (42 kS/s);</li>
  * <li>a second accelerometer through the same kind of chain, but its low-pass was in bypass during
  * the run: everything above 12.8 kHz folds (the notebook's validation warns);</li>
- * <li>a microphone into a delta-sigma digitizer at 48 kS/s whose built-in digital filter protects it;</li>
+ * <li>a microphone (to 20 kHz) into a delta-sigma digitizer at 48 kS/s whose built-in digital
+ * filter (100 dB from 0.547·fs) protects it: nothing the microphone passes folds;</li>
  * <li>a high-speed camera at 1000 frames/s watching a painted mark on the output shaft (0.8 ms
  * exposure of a 1 ms frame period).</li>
  * </ol>
@@ -63,6 +67,10 @@ public final class GearboxDemo {
     static final double SOUND_RATE_HZ = 48000.0;
     static final double FRAME_RATE_HZ = 1000.0;
     static final double SECONDS = 2.0;
+    /** Level of the accelerometers' 32 kHz resonance ringing at the digitizer input (the scenario's "measured" value). */
+    static final double RINGING_DBFS = -30.0;
+    /** Dynamic range the scenario's data sheet gives for the 24-bit digitizer (dB, full scale to noise). */
+    static final double DAQ_DYNAMIC_RANGE_DB = 110.0;
 
     private GearboxDemo() {
     }
@@ -137,6 +145,7 @@ public final class GearboxDemo {
         daq.getInputRangesV().addAll(List.of(1.0, 10.0));
         daq.setMaxRateHz(51200.0);
         daq.setDigitalFilter(false);
+        daq.setDynamicRangeDb(DAQ_DYNAMIC_RANGE_DB);
 
         Digitizer soundCard = f.createDigitizer();
         soundCard.setId("DS-2");
@@ -149,6 +158,7 @@ public final class GearboxDemo {
         soundCard.setPassbandFraction(0.453);
         soundCard.setStopbandFraction(0.547);
         soundCard.setStopbandAttenuationDb(100.0);
+        soundCard.setDynamicRangeDb(105.0);
 
         Camera camera = f.createCamera();
         camera.setId("CAM-HS");
@@ -175,12 +185,14 @@ public final class GearboxDemo {
         filterA.setCutoffHz(10000.0);
         housing.getStages().add(filterA);
         housing.getStages().add(samplerStage(daq, VIBRATION_RATE_HZ, 10.0));
+        housing.setOutOfBandLevelDbfs(RINGING_DBFS);
 
         SignalChain bearing = chain("CH-BZ", "bearing Z, filter bypassed");
         bearing.getStages().add(stage(accBearing));
         bearing.getStages().add(gainStage(charge, 10.0));
         bearing.getStages().add(stage(lowPassB));
         bearing.getStages().add(samplerStage(daq, VIBRATION_RATE_HZ, 10.0));
+        bearing.setOutOfBandLevelDbfs(RINGING_DBFS);
 
         SignalChain sound = chain("CH-MIC", "sound at 0.5 m");
         sound.getStages().add(stage(microphone));
@@ -259,8 +271,9 @@ public final class GearboxDemo {
                 tones.add(new Tone(MESH_HZ + SHAFT_HZ, 0.03, 2.0));
                 tones.add(new Tone(2 * MESH_HZ, 0.12, 0.7));
                 tones.add(new Tone(3 * MESH_HZ, 0.05, 1.9));
-                tones.add(new Tone(17 * MESH_HZ, 0.05, 0.4)); // 15.41 kHz: above Nyquist at 25.6 kS/s
-                tones.add(new Tone(RESONANCE_HZ, 0.25, 2.6)); // mounted resonance rung by tooth impacts
+                tones.add(new Tone(17 * MESH_HZ, 0.02, 0.4)); // 15.41 kHz, −34 dBFS: above Nyquist at 25.6 kS/s
+                // mounted resonance rung by tooth impacts: the strongest content above Nyquist
+                tones.add(new Tone(RESONANCE_HZ, Math.pow(10, RINGING_DBFS / 20), 2.6));
             }
             case "CH-MIC" -> {
                 tones.add(new Tone(MESH_HZ, 0.20, 0.5));

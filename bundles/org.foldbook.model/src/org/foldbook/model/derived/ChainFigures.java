@@ -5,6 +5,11 @@ import java.util.Optional;
 import java.util.ArrayList;
 import java.util.List;
 
+import java.util.function.DoubleFunction;
+
+import org.foldbook.dsp.digitizer.AliasAnalysis;
+import org.foldbook.dsp.digitizer.IdealQuantiser;
+import org.foldbook.dsp.digitizer.RateSearchResult;
 import org.foldbook.dsp.filter.AnalogLowPass;
 import org.foldbook.dsp.filter.BesselNormalization;
 import org.foldbook.dsp.filter.Cascade;
@@ -224,20 +229,106 @@ public final class ChainFigures {
 
     /**
      * Alias-free band, attenuation at Nyquist and protection margin of a digitizer chain, computed by
-     * {@code org.foldbook.dsp.digitizer} for a full-scale out-of-band tone that must stay below the
-     * ideal quantisation noise. Empty for camera chains, or when the rate, the resolution or the
-     * sensor's upper frequency is not known.
+     * {@code org.foldbook.dsp.digitizer} for the chain's {@link #need}: the alias of the strongest
+     * out-of-band content must fall below the digitizer's noise floor. Empty for camera chains, or
+     * when the rate, the resolution or the sensor's upper frequency is not known.
      */
     public static Optional<org.foldbook.dsp.digitizer.ChainFigures> figures(SignalChain chain) {
-        Stage sampler = samplingStage(chain);
+        Optional<Need> need = need(chain);
         double rate = samplingRateHz(chain);
         double sensorMax = frontEndUpperHz(chain);
-        if (sampler == null || !(sampler.getDevice() instanceof Digitizer digitizer) || !(rate > 0)
-                || digitizer.getResolutionBits() <= 0 || !(sensorMax > 0)) {
+        if (need.isEmpty() || !(sensorMax > 0)) {
             return Optional.empty();
         }
-        return Optional.of(org.foldbook.dsp.digitizer.ChainFigures.of(sensorMax, chainResponse(chain),
-                digitizer.getResolutionBits(), rate));
+        Digitizer digitizer = (Digitizer) samplingStage(chain).getDevice();
+        Need n = need.get();
+        return Optional.of(org.foldbook.dsp.digitizer.ChainFigures.ofDynamicRange(sensorMax, chainResponse(chain),
+                digitizer.getResolutionBits(), rate, n.dynamicRangeDb(), n.outOfBandLevelDbfs()));
+    }
+
+    /**
+     * What the chain's filtering must achieve, and from which figures: the digitizer's dynamic range
+     * (its specification, else the ideal quantiser's 6.02·N + 1.76 dB) plus the level of the strongest
+     * content above Nyquist (the chain's stated level, else 0 dBFS, the worst case). Empty without a
+     * digitizer, a positive rate or a resolution.
+     */
+    public static Optional<Need> need(SignalChain chain) {
+        Stage sampler = samplingStage(chain);
+        double rate = samplingRateHz(chain);
+        if (sampler == null || !(sampler.getDevice() instanceof Digitizer digitizer) || !(rate > 0)
+                || digitizer.getResolutionBits() <= 0 || digitizer.getResolutionBits() > IdealQuantiser.MAX_BITS) {
+            return Optional.empty();
+        }
+        boolean rangeStated = digitizer.getDynamicRangeDb() != null;
+        double range = rangeStated ? digitizer.getDynamicRangeDb()
+                : new IdealQuantiser(digitizer.getResolutionBits(), 1.0).snrDb();
+        boolean levelStated = chain.getOutOfBandLevelDbfs() != null;
+        double level = levelStated ? chain.getOutOfBandLevelDbfs() : 0.0;
+        return Optional.of(new Need(digitizer.getResolutionBits(), range, rangeStated, level, levelStated,
+                org.foldbook.dsp.digitizer.ChainFigures.requiredAttenuationDb(range, level)));
+    }
+
+    /**
+     * The band the chain is meant to keep: the analog filter's cutoff, else a built-in digital
+     * filter's pass-band edge; NaN when neither is known.
+     */
+    public static double intendedBandHz(SignalChain chain) {
+        Stage filter = filterStage(chain);
+        if (filter != null) {
+            return effectiveCutoffHz(filter);
+        }
+        Stage sampler = samplingStage(chain);
+        if (sampler != null && sampler.getDevice() instanceof Digitizer digitizer && digitizer.isDigitalFilter()
+                && digitizer.getPassbandFraction() != null) {
+            return digitizer.getPassbandFraction() * samplingRateHz(chain);
+        }
+        return Double.NaN;
+    }
+
+    /**
+     * The lowest rate up to the digitizer's maximum at which {@code bandHz} stays alias-free for the
+     * chain's need, by {@code AliasAnalysis.lowestRate} (a built-in digital filter tracks the rate).
+     * Empty without a need, a sensor upper frequency, or when the band does not fit under the maximum.
+     */
+    public static Optional<RateSearchResult> lowestAliasFreeRate(SignalChain chain, double bandHz) {
+        Optional<Need> need = need(chain);
+        double sensorMax = frontEndUpperHz(chain);
+        if (need.isEmpty() || !(sensorMax > 0) || !(bandHz > 0)) {
+            return Optional.empty();
+        }
+        Digitizer digitizer = (Digitizer) samplingStage(chain).getDevice();
+        double maxRate = digitizer.getMaxRateHz();
+        if (!(maxRate >= 2 * bandHz)) {
+            return Optional.empty();
+        }
+        Optional<FrequencyResponse> analog = Optional.ofNullable(filterStage(chain)).flatMap(ChainFigures::filterResponse);
+        boolean digital = digitizer.isDigitalFilter() && digitizer.getPassbandFraction() != null
+                && digitizer.getStopbandFraction() != null && digitizer.getStopbandAttenuationDb() != null;
+        DoubleFunction<FrequencyResponse> atRate = fs -> {
+            List<FrequencyResponse> parts = new ArrayList<>();
+            analog.ifPresent(parts::add);
+            if (digital) {
+                parts.add(DigitizerDigitalFilter.of(fs, digitizer.getPassbandFraction(),
+                        digitizer.getStopbandFraction(), digitizer.getStopbandAttenuationDb()));
+            }
+            return parts.isEmpty() ? chainResponse(chain) : parts.size() == 1 ? parts.get(0) : Cascade.of(parts);
+        };
+        return Optional.of(AliasAnalysis.lowestRate(atRate, sensorMax, need.get().requiredDb(), bandHz,
+                2 * bandHz, maxRate, 1e-6));
+    }
+
+    /**
+     * The alias criterion of a digitizer chain: needed attenuation = dynamic range + out-of-band level.
+     *
+     * @param bits               the digitizer's resolution
+     * @param dynamicRangeDb     full scale over the noise floor (dB)
+     * @param rangeStated        false when it is the ideal quantiser's 6.02·N + 1.76 dB
+     * @param outOfBandLevelDbfs the strongest content above Nyquist (dBFS)
+     * @param levelStated        false when it is the worst case, 0 dBFS
+     * @param requiredDb         the attenuation needed, max(0, range + level)
+     */
+    public record Need(int bits, double dynamicRangeDb, boolean rangeStated, double outOfBandLevelDbfs,
+            boolean levelStated, double requiredDb) {
     }
 
     /** A closed frequency band in Hz. */

@@ -3,6 +3,7 @@ package org.foldbook.model.validation;
 import static org.foldbook.model.validation.Findings.CUTOFF_AT_OR_ABOVE_NYQUIST;
 import static org.foldbook.model.validation.Findings.EXPOSURE_LONGER_THAN_FRAME;
 import static org.foldbook.model.validation.Findings.NO_SAMPLING_STAGE;
+import static org.foldbook.model.validation.Findings.PROTECTION_SHORT_OF_NEED;
 import static org.foldbook.model.validation.Findings.UNPROTECTED_BAND_FOLDS;
 import static org.foldbook.model.validation.Findings.hz;
 import static org.foldbook.model.validation.Findings.report;
@@ -13,7 +14,9 @@ import java.util.Optional;
 
 import org.eclipse.emf.common.util.Diagnostic;
 import org.eclipse.emf.common.util.DiagnosticChain;
+import org.foldbook.dsp.digitizer.RateSearchResult;
 import org.foldbook.model.Camera;
+import org.foldbook.model.Digitizer;
 import org.foldbook.model.SignalChain;
 import org.foldbook.model.Stage;
 import org.foldbook.model.derived.ChainFigures;
@@ -76,6 +79,62 @@ public final class ChainRules {
                         + " at " + hz(rate),
                 "Add a low-pass filter with its cutoff below " + hz(rate / 2) + ", or sample above "
                         + hz(2 * upper));
+    }
+
+    /**
+     * Warning when a chain has anti-alias filtering (analog or a digitizer's built-in filter) but it
+     * falls short of the need (dynamic range + out-of-band level): names the shortfall, the alias-free
+     * band it does give and what would do, including the lowest rate that keeps the intended band
+     * (the cutoff, or the built-in filter's pass band) alias-free. Only for chains that state their
+     * out-of-band level; unfiltered chains are left to {@link #sensorBandProtected}.
+     */
+    public static boolean protectionMeetsNeed(SignalChain chain, DiagnosticChain diagnostics,
+            Map<Object, Object> context) {
+        if (ChainFigures.filterStage(chain) == null && !ChainFigures.hasBuiltInDigitalFilter(chain)) {
+            return true;
+        }
+        Optional<org.foldbook.dsp.digitizer.ChainFigures> figures = ChainFigures.figures(chain);
+        Optional<ChainFigures.Need> need = ChainFigures.need(chain);
+        // only once the chain states what it must be protected against: under the worst case (a
+        // full-scale tone) almost no real filter passes, and a warning on every chain would say nothing
+        if (figures.isEmpty() || need.isEmpty() || !need.get().levelStated() || !(figures.get().marginDb() < 0)) {
+            return true;
+        }
+        org.foldbook.dsp.digitizer.ChainFigures f = figures.get();
+        ChainFigures.Need n = need.get();
+        String band = f.aliasFreeBandHz() > 0 ? "0 to " + hz(f.aliasFreeBandHz()) : "none";
+        if (!Double.isNaN(f.limitingSourceHz())) {
+            band += " (content at " + hz(f.limitingSourceHz()) + " folds to "
+                    + hz(org.foldbook.dsp.fold.Folding.apparentHz(f.limitingSourceHz(), f.sampleRateHz())) + ")";
+        }
+        String problem = String.format(Locale.ROOT,
+                "content that folds is attenuated by as little as %.1f dB where %.1f dB is needed (%.1f dB %s + %.1f dBFS %s)"
+                        + ": protection margin %.1f dB; alias-free band %s",
+                f.requiredAttenuationDb() + f.marginDb(), f.requiredAttenuationDb(), n.dynamicRangeDb(),
+                n.rangeStated() ? "dynamic range" : "ideal " + n.bits() + "-bit SNR", n.outOfBandLevelDbfs(),
+                n.levelStated() ? "out-of-band content" : "content assumed at full scale", f.marginDb(), band);
+        String remedy = "Use a steeper filter or a lower cutoff, or sample faster";
+        double intended = ChainFigures.intendedBandHz(chain);
+        Optional<RateSearchResult> lowest = ChainFigures.lowestAliasFreeRate(chain, intended);
+        if (lowest.isPresent()) {
+            Digitizer digitizer = (Digitizer) ChainFigures.samplingStage(chain).getDevice();
+            remedy += lowest.get().found()
+                    ? String.format(Locale.ROOT, ": %s keeps 0 to %s alias-free with this filter",
+                            rate(lowest.get()), hz(intended))
+                    : String.format(Locale.ROOT, "; no rate up to the digitizer's %s keeps 0 to %s alias-free with this filter",
+                            hz(digitizer.getMaxRateHz()).replace("Hz", "S/s"), hz(intended));
+        }
+        return report(diagnostics, Diagnostic.WARNING, PROTECTION_SHORT_OF_NEED, chain, problem, remedy);
+    }
+
+    /**
+     * A searched rate for a message, rounded up to 10 S/s (0.1 S/s below 1 kS/s) from the lowest end of
+     * its bracket, so that the rate named is enough: "42.00 kS/s".
+     */
+    private static String rate(RateSearchResult found) {
+        double low = found.rateHz() - found.toleranceHz();
+        return low >= 1e3 ? String.format(Locale.ROOT, "%.2f kS/s", Math.ceil(low / 10) / 100)
+                : String.format(Locale.ROOT, "%.1f S/s", Math.ceil(low * 10) / 10);
     }
 
     /** A camera cannot expose longer than one frame period (1/frame rate). */

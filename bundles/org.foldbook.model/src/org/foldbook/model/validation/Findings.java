@@ -26,6 +26,7 @@ public final class Findings {
     public static final int RIG_OUTSIDE_VALIDITY = 10;
     public static final int RIG_VALIDITY_REVERSED = 11;
     public static final int RECORDING_NOT_CHECKABLE = 12;
+    public static final int PROTECTION_SHORT_OF_NEED = 13;
 
     private Findings() {
     }
