@@ -3,6 +3,7 @@ package org.foldbook.ui.notebook;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
@@ -106,9 +107,12 @@ class NotebookPartTest {
         assertEquals("9.1 dB attenuation", rows.get("Analog filter at Nyquist"));
         assertEquals("32 kHz (sensor band or resonance)", rows.get("Front end passes up to"));
         assertTrue(rows.containsKey("Alias-free band") && rows.containsKey("Protection margin"), rows.toString());
-        // 24 bits, full-scale tone below the ideal quantisation noise: 20·log10(2^24·√1.5) = 146.26 dB
-        // (the ideal quantiser's 6.02·N + 1.76 dB, common practice)
-        assertEquals("146.3 dB", rows.get("Needed (24-bit, full-scale tone)"));
+        // the demo's criterion: aliases of −30 dBFS content must fall under a 110 dB dynamic range
+        assertEquals("110 dB range + −30 dBFS content = 80 dB", rows.get("Needed attenuation"));
+        // Butterworth |H|² = 1/(1+(f/fc)^2n): 9.14 dB at 12.8 kHz, 9.14 − 80 = −70.86 dB (hand-computed)
+        assertEquals("-70.9 dB (short of the need)", rows.get("Protection margin"));
+        // 25.6 kHz lies inside the front end's 32 kHz and folds onto 0 Hz (sampling theorem)
+        assertEquals("none (limited by content at 25.6 kHz)", rows.get("Alias-free band"));
         Chart chart = find(shell, Chart.class);
         // response, the band that folds, the Nyquist line, the needed attenuation
         assertEquals(4, chart.getSeriesSet().getSeries().length);
@@ -117,6 +121,13 @@ class NotebookPartTest {
         rows = figures();
         assertEquals("none in the chain", rows.get("Analog filter at Nyquist"));
         assertEquals("12.8 kHz – 32 kHz lands in 0 Hz – 12.8 kHz", rows.get("Folds unprotected"));
+        assertEquals("-80.0 dB (short of the need)", rows.get("Protection margin")); // |H| = 1: 0 − 80 dB
+
+        part.select(channel("sound 0.5 m"));
+        rows = figures();
+        // no level stated for the microphone chain: the worst case, a full-scale tone, against 105 dB
+        assertEquals("105 dB range + 0 dBFS content (worst case: no level given) = 105 dB", rows.get("Needed attenuation"));
+        assertEquals("nothing above Nyquist reaches the digitizer", rows.get("Protection margin"));
 
         part.select(channel("mark brightness"));
         rows = figures();
@@ -145,18 +156,23 @@ class NotebookPartTest {
     }
 
     @Test
-    @DisplayName("the findings list the bypassed filter; double-click selects its chain")
+    @DisplayName("the findings list the filter short of the need and the bypassed filter; double-click selects its chain")
     void findingsListed() {
         Table findings = findingsTable();
         waitFor(() -> findings.getItemCount() > 0 || statusText().startsWith("No findings"), "validation job");
-        assertEquals(1, findings.getItemCount(), statusText());
-        TableItem item = findings.getItem(0);
+        assertEquals(2, findings.getItemCount(), statusText());
+        TableItem short_ = findings.getItem(0);
+        assertEquals("Warning", short_.getText(0));
+        assertEquals("housing Z, filtered", short_.getText(1));
+        assertTrue(short_.getText(2).startsWith("content that folds is attenuated by as little as 9.1 dB where 80.0 dB is needed"),
+                short_.getText(2));
+        TableItem item = findings.getItem(1);
         assertEquals("Warning", item.getText(0));
         assertEquals("bearing Z, filter bypassed", item.getText(1));
         assertTrue(item.getText(2).startsWith("no anti-alias filter"), item.getText(2));
-        assertTrue(statusText().startsWith("0 error(s), 1 warning(s)"), statusText());
+        assertTrue(statusText().startsWith("0 error(s), 2 warning(s)"), statusText());
 
-        findings.setSelection(0);
+        findings.setSelection(1);
         findings.notifyListeners(SWT.DefaultSelection, new Event());
         SignalChain shown = part.shownChain();
         assertNotNull(shown);
@@ -189,6 +205,34 @@ class NotebookPartTest {
         rate.notifyListeners(SWT.DefaultSelection, new Event());
         assertTrue(findAll(shell, Label.class).stream().anyMatch(l -> l.getText().contains("above the digitizer's maximum")));
         assertEquals("25.6 kHz", figures().get("Nyquist frequency"));
+    }
+
+    @Test
+    @DisplayName("changing the out-of-band level is a command: the need follows (110 dB − 50 dBFS = 60 dB), undo restores, empty unsets")
+    void editOutOfBandLevel() {
+        part.select(channel("housing Z"));
+        Text level = findAll(shell, Text.class).get(2);
+        assertEquals("-30", level.getText());
+        level.setText("-50");
+        level.notifyListeners(SWT.DefaultSelection, new Event());
+        assertTrue(document.isDirty());
+        assertEquals(-50.0, part.shownChain().getOutOfBandLevelDbfs());
+        assertEquals("110 dB range + −50 dBFS content = 60 dB", figures().get("Needed attenuation"));
+        document.undo();
+        assertEquals("110 dB range + −30 dBFS content = 80 dB", figures().get("Needed attenuation"));
+        assertFalse(document.isDirty());
+
+        level.setText("");
+        level.notifyListeners(SWT.DefaultSelection, new Event());
+        assertNull(part.shownChain().getOutOfBandLevelDbfs());
+        assertEquals("110 dB range + 0 dBFS content (worst case: no level given) = 110 dB", figures().get("Needed attenuation"));
+        document.undo();
+        assertEquals(-30.0, part.shownChain().getOutOfBandLevelDbfs());
+
+        level.setText("loud");
+        level.notifyListeners(SWT.DefaultSelection, new Event());
+        assertTrue(findAll(shell, Label.class).stream().anyMatch(l -> l.getText().contains("Out-of-band level is not a number: 'loud'")));
+        assertEquals(-30.0, part.shownChain().getOutOfBandLevelDbfs());
     }
 
     @Test

@@ -107,7 +107,7 @@ public final class ChainSummary {
             if (!rows.get(rows.size() - 1).value().equals(whole)) { // differs when a digital filter adds to it
                 rows.add(new Row("Whole chain at Nyquist", whole));
             }
-            rows.add(new Row("Needed (" + f.bits() + "-bit, full-scale tone)", db(f.requiredAttenuationDb())));
+            ChainFigures.need(chain).ifPresent(n -> rows.add(new Row("Needed attenuation", needText(n))));
             String band = f.aliasFreeBandHz() > 0 ? "0 – " + hz(f.aliasFreeBandHz()) : "none";
             if (!Double.isNaN(f.limitingSourceHz())) {
                 band += " (limited by content at " + hz(f.limitingSourceHz()) + ")";
@@ -122,6 +122,23 @@ public final class ChainSummary {
                     + hz(b.lowHz()) + " – " + hz(b.highHz())).orElse("nothing")));
         }
         return rows;
+    }
+
+    /**
+     * The criterion spelled out: "110 dB range + −30 dBFS content = 80 dB"; figures that were not
+     * given say what stands in for them (the ideal quantiser's SNR, a full-scale tone).
+     */
+    public static String needText(ChainFigures.Need need) {
+        String range = number(need.dynamicRangeDb()) + " dB "
+                + (need.rangeStated() ? "range" : "ideal " + need.bits() + "-bit SNR (no range given)");
+        String level = signed(need.outOfBandLevelDbfs()) + " dBFS "
+                + (need.levelStated() ? "content" : "content (worst case: no level given)");
+        return range + " + " + level + " = " + number(need.requiredDb()) + " dB";
+    }
+
+    /** A number with a true minus sign for the reader: "−30", "0", "6". */
+    static String signed(double value) {
+        return value < 0 ? "−" + number(-value) : number(value);
     }
 
     private static void cameraRows(SignalChain chain, Stage sampler, double rate, List<Row> rows) {

@@ -49,8 +49,8 @@ import jakarta.inject.Inject;
  * experiments with their channels and recordings), a details pane with the figures of the selected
  * chain or channel — computed on demand, never stored — and its magnitude response, and the findings
  * of the notebook's validation, which runs as a background job and can be stopped. Double-clicking a
- * finding selects its object. The sampling rate and filter cutoff of a chain can be changed in the
- * details; each change is a command (undo/redo) and the figures and findings follow.
+ * finding selects its object. The sampling rate, filter cutoff and out-of-band level of a chain can be
+ * changed in the details; each change is a command (undo/redo) and the figures and findings follow.
  */
 public class NotebookPart {
 
@@ -79,6 +79,7 @@ public class NotebookPart {
     private Composite settings;
     private Text rateField;
     private Text cutoffField;
+    private Text levelField;
     private Label settingsStatus;
     private PlotView plot;
     private Label findingsStatus;
@@ -168,7 +169,7 @@ public class NotebookPart {
         chainPath = new Label(details, SWT.WRAP);
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(chainPath);
         settings = new Composite(details, SWT.NONE);
-        GridLayoutFactory.fillDefaults().numColumns(7).spacing(6, 4).applyTo(settings);
+        GridLayoutFactory.fillDefaults().numColumns(10).spacing(6, 4).applyTo(settings);
         GridDataFactory.fillDefaults().grab(true, false).applyTo(settings);
         new Label(settings, SWT.NONE).setText("Sampling rate:");
         rateField = new Text(settings, SWT.BORDER);
@@ -178,11 +179,17 @@ public class NotebookPart {
         cutoffField = new Text(settings, SWT.BORDER);
         GridDataFactory.fillDefaults().hint(80, SWT.DEFAULT).applyTo(cutoffField);
         new Label(settings, SWT.NONE).setText("Hz");
+        new Label(settings, SWT.NONE).setText("   Out-of-band level:");
+        levelField = new Text(settings, SWT.BORDER);
+        levelField.setToolTipText("Strongest content expected above Nyquist, relative to full scale; empty = 0 dBFS, the worst case");
+        GridDataFactory.fillDefaults().hint(60, SWT.DEFAULT).applyTo(levelField);
+        new Label(settings, SWT.NONE).setText("dBFS");
         // the hint, or what is wrong with the value typed (one line, so the layout does not jump)
         settingsStatus = new Label(settings, SWT.NONE);
         GridDataFactory.fillDefaults().grab(true, false).indent(16, 0).align(SWT.FILL, SWT.CENTER).applyTo(settingsStatus);
         rateField.addListener(SWT.DefaultSelection, e -> applySetting(rateField, true));
         cutoffField.addListener(SWT.DefaultSelection, e -> applySetting(cutoffField, false));
+        levelField.addListener(SWT.DefaultSelection, e -> applyLevel());
         settings.setVisible(false);
 
         Composite middle = new Composite(details, SWT.NONE);
@@ -347,6 +354,8 @@ public class NotebookPart {
         rateField.setText(sampler == null ? "" : ChainSummary.plain(ChainFigures.samplingRateHz(chain)));
         cutoffField.setEnabled(filter != null);
         cutoffField.setText(filter == null ? "" : ChainSummary.plain(ChainFigures.effectiveCutoffHz(filter)));
+        levelField.setEnabled(sampler != null && sampler.getDevice() instanceof Digitizer);
+        levelField.setText(chain.getOutOfBandLevelDbfs() == null ? "" : ChainSummary.plain(chain.getOutOfBandLevelDbfs()));
         drawResponse(chain);
         title.getParent().layout(true, true);
     }
@@ -429,6 +438,37 @@ public class NotebookPart {
         Command command = SetCommand.create(document.domain(), stage,
                 rate ? NotebookPackage.Literals.STAGE__RATE_HZ : NotebookPackage.Literals.STAGE__CUTOFF_HZ, value);
         document.execute(command);
+    }
+
+    /** The chain's out-of-band level: a number in dBFS, or empty to unset it (0 dBFS, the worst case). */
+    private void applyLevel() {
+        SignalChain chain = shownChain;
+        if (document == null || chain == null) {
+            return;
+        }
+        String text = levelField.getText().trim().replace('−', '-');
+        Object value;
+        if (text.isEmpty()) {
+            if (chain.getOutOfBandLevelDbfs() == null) {
+                return;
+            }
+            value = SetCommand.UNSET_VALUE;
+        } else {
+            double level;
+            try {
+                level = Double.parseDouble(text);
+            } catch (NumberFormatException e) {
+                settingsProblem("Out-of-band level is not a number: '" + levelField.getText().trim() + "'.");
+                return;
+            }
+            if (!Double.isFinite(level)) {
+                settingsProblem("Out-of-band level must be a finite number of dBFS, was " + text + ".");
+                return;
+            }
+            value = level;
+        }
+        document.execute(SetCommand.create(document.domain(), chain,
+                NotebookPackage.Literals.SIGNAL_CHAIN__OUT_OF_BAND_LEVEL_DBFS, value));
     }
 
     private void settingsProblem(String problem) {
