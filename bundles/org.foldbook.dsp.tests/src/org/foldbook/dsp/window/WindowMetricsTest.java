@@ -127,6 +127,12 @@ class WindowMetricsTest {
         assertTrue(e.getMessage().contains("n") && e.getMessage().contains("0"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> WindowShape.kaiser(-1));
         assertTrue(e.getMessage().contains("beta") && e.getMessage().contains("-1"), e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> WindowShape.kaiser(800));
+        assertTrue(e.getMessage().contains("beta") && e.getMessage().contains("800"), e.getMessage());
+        Window big = WindowShape.kaiser(700).periodic(16);
+        for (int j = 0; j < 16; j++) {
+            assertTrue(Double.isFinite(big.get(j)) && big.get(j) >= 0, "kaiser(700) sample " + j);
+        }
         e = assertThrows(IllegalArgumentException.class, () -> WindowShape.kaiser(Double.NaN));
         assertTrue(e.getMessage().contains("beta"), e.getMessage());
     }

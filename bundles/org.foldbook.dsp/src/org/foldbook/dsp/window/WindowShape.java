@@ -42,9 +42,12 @@ public final class WindowShape {
         this.beta = beta;
     }
 
-    /** Kaiser window with shape parameter {@code beta >= 0} (0 is rectangular). */
+    /**
+     * Kaiser window with shape parameter {@code 0 <= beta <= 700} (0 is rectangular; I0 overflows a double
+     * beyond about 710, and practical windows use beta below 20).
+     */
     public static WindowShape kaiser(double beta) {
-        Check.nonNegative("beta", beta);
+        Check.inRange("beta", beta, 0, 700);
         return new WindowShape("kaiser(" + beta + ")", null, beta);
     }
 
