@@ -26,8 +26,10 @@ import org.visnow.jlargearrays.ConcurrencyUtils;
  * An operator is immutable and may be shared by any number of threads: the transform library keeps only
  * read-only twiddle tables in it after construction. Scratch memory is always the caller's ({@code work}
  * arrays) or allocated per call, so one operator shared by all sweep threads and one operator per thread
- * both work; each thread needs its own {@code work} array. The library itself splits a single transform
- * over threads when {@code n >= 8192} and its global thread count is above 1 (its default is the number of
+ * both work; each thread needs its own {@code work} array. The in-place methods allocate nothing for lengths
+ * whose prime factors are 2, 3 and 5; other lengths go through Bluestein's algorithm, which allocates its
+ * scratch inside the library on every call. The library itself splits a single transform over 2 threads
+ * when {@code n >= 8192} (4 from 65536) if its global thread count allows (its default is the number of
  * processors, on a non-daemon pool). Call {@link #configureThreads(int)} once at start-up: use 1 when the
  * caller already runs transforms in parallel (the rate sweep), the core count for single big transforms.
  */
