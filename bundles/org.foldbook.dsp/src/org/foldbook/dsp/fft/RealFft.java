@@ -12,7 +12,7 @@ import org.visnow.jlargearrays.ConcurrencyUtils;
 
 /**
  * Forward DFT of a real sequence of any length {@code n >= 1} (JTransforms' {@code DoubleFFT_1D} inside:
- * split-radix for powers of two, mixed radix 2/3/4/5, Bluestein otherwise).
+ * split radix for powers of two, mixed radix, Bluestein for large prime factors).
  *
  * <h2>Convention and layout</h2>
  * {@code X[k] = sum_{j=0}^{n-1} x[j] exp(-2 pi i j k / n)}, unnormalised (no 1/n). Only the one-sided half
@@ -26,9 +26,9 @@ import org.visnow.jlargearrays.ConcurrencyUtils;
  * An operator is immutable and may be shared by any number of threads: the transform library keeps only
  * read-only twiddle tables in it after construction. Scratch memory is always the caller's ({@code work}
  * arrays) or allocated per call, so one operator shared by all sweep threads and one operator per thread
- * both work; each thread needs its own {@code work} array. The in-place methods allocate nothing for lengths
- * whose prime factors are 2, 3 and 5; other lengths go through Bluestein's algorithm, which allocates its
- * scratch inside the library on every call. The library itself splits a single transform over 2 threads
+ * both work; each thread needs its own {@code work} array. The in-place methods allocate nothing unless the
+ * library picks Bluestein's algorithm (when what is left of n after the factors 2, 3, 4, 5 is 211 or more),
+ * which allocates its scratch on every call. The library itself splits a single transform over 2 threads
  * when {@code n >= 8192} (4 from 65536) if its global thread count allows (its default is the number of
  * processors, on a non-daemon pool). Call {@link #configureThreads(int)} once at start-up: use 1 when the
  * caller already runs transforms in parallel (the rate sweep), the core count for single big transforms.
