@@ -153,6 +153,15 @@ class NotebookPartTest {
         rows = figures();
         assertEquals("2026-03-01", rows.get("Valid from"));
         assertTrue(rows.get("Notes").contains("guards closed"), rows.get("Notes"));
+        org.foldbook.model.Digitizer daq = (org.foldbook.model.Digitizer) document.notebook().getDevices().stream()
+                .filter(d -> "DAQ-8".equals(d.getId())).findFirst().orElseThrow();
+        part.select(daq);
+        assertEquals("110 dB (specification)", figures().get("Dynamic range"));
+        daq.setDynamicRangeDb(null);
+        part.select(document.notebook().getRigs().get(0));
+        part.select(daq);
+        // 20·log10(2^24·√1.5) = 146.26 dB (Kester, Analog Devices MT-001: 6.02·N + 1.76 dB)
+        assertEquals("146.3 dB (not given: ideal quantiser, 6.02·N + 1.76 dB)", figures().get("Dynamic range"));
     }
 
     @Test

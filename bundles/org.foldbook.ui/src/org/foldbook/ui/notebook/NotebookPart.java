@@ -169,7 +169,7 @@ public class NotebookPart {
         chainPath = new Label(details, SWT.WRAP);
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(chainPath);
         settings = new Composite(details, SWT.NONE);
-        GridLayoutFactory.fillDefaults().numColumns(10).spacing(6, 4).applyTo(settings);
+        GridLayoutFactory.fillDefaults().numColumns(9).spacing(6, 4).applyTo(settings);
         GridDataFactory.fillDefaults().grab(true, false).applyTo(settings);
         new Label(settings, SWT.NONE).setText("Sampling rate:");
         rateField = new Text(settings, SWT.BORDER);
@@ -184,9 +184,10 @@ public class NotebookPart {
         levelField.setToolTipText("Strongest content expected above Nyquist, relative to full scale; empty = 0 dBFS, the worst case");
         GridDataFactory.fillDefaults().hint(60, SWT.DEFAULT).applyTo(levelField);
         new Label(settings, SWT.NONE).setText("dBFS");
-        // the hint, or what is wrong with the value typed (one line, so the layout does not jump)
+        // the hint, or what is wrong with the value typed: one line of its own under the fields, so
+        // that a long message fits and the layout does not jump
         settingsStatus = new Label(settings, SWT.NONE);
-        GridDataFactory.fillDefaults().grab(true, false).indent(16, 0).align(SWT.FILL, SWT.CENTER).applyTo(settingsStatus);
+        GridDataFactory.fillDefaults().span(9, 1).grab(true, false).align(SWT.FILL, SWT.CENTER).applyTo(settingsStatus);
         rateField.addListener(SWT.DefaultSelection, e -> applySetting(rateField, true));
         cutoffField.addListener(SWT.DefaultSelection, e -> applySetting(cutoffField, false));
         levelField.addListener(SWT.DefaultSelection, e -> applyLevel());

@@ -82,6 +82,11 @@ final class ObjectSummary {
             add(rows, "Cutoff", f.getCutoffHz() > 0 ? ChainSummary.hz(f.getCutoffHz()) : null);
         } else if (device instanceof Digitizer d) {
             add(rows, "Resolution", d.getResolutionBits() + " bits");
+            add(rows, "Dynamic range", d.getDynamicRangeDb() != null ? ChainSummary.number(d.getDynamicRangeDb()) + " dB (specification)"
+                    : d.getResolutionBits() > 0 && d.getResolutionBits() <= org.foldbook.dsp.digitizer.IdealQuantiser.MAX_BITS
+                            ? ChainSummary.number(new org.foldbook.dsp.digitizer.IdealQuantiser(d.getResolutionBits(), 1.0).snrDb())
+                                    + " dB (not given: ideal quantiser, 6.02·N + 1.76 dB)"
+                            : null);
             add(rows, "Highest rate", ChainSummary.rate(d.getMaxRateHz()));
             add(rows, "Built-in digital filter", d.isDigitalFilter() ? "yes (delta-sigma)" : "no");
         } else if (device instanceof Camera c) {
