@@ -3,6 +3,7 @@ package org.foldbook.dsp.window;
 import java.util.Objects;
 
 import org.foldbook.dsp.Check;
+import org.foldbook.dsp.SpecialFunctions;
 
 /**
  * A window function independent of its length; {@link #create(int, Symmetry)} samples it.
@@ -101,10 +102,10 @@ public final class WindowShape {
                 w[j] = v;
             }
         } else {
-            double norm = Bessel.i0(beta);
+            double norm = SpecialFunctions.besselI0(beta);
             for (int j = 0; j < n; j++) {
                 double r = 2.0 * j / m - 1.0;
-                w[j] = Bessel.i0(beta * Math.sqrt(Math.max(0.0, 1.0 - r * r))) / norm;
+                w[j] = SpecialFunctions.besselI0(beta * Math.sqrt(Math.max(0.0, 1.0 - r * r))) / norm;
             }
         }
         return w;
