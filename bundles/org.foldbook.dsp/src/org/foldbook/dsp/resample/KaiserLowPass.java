@@ -1,5 +1,7 @@
 package org.foldbook.dsp.resample;
 
+import org.foldbook.dsp.SpecialFunctions;
+
 import org.foldbook.dsp.Check;
 
 /**
@@ -57,13 +59,13 @@ public final class KaiserLowPass {
     private static double[] windowedSinc(int order, double fc, double beta) {
         int n = order + 1;
         double half = order / 2.0;
-        double i0b = Bessel.i0(beta);
+        double i0b = SpecialFunctions.besselI0(beta);
         double[] h = new double[n];
         double sum = 0;
         for (int i = 0; i <= order / 2; i++) {           // symmetric: first half and centre, then mirror
             double m = i - half;
             double u = half == 0 ? 0 : m / half;
-            h[i] = fc * KaiserSinc.sinc(fc * m) * Bessel.i0(beta * Math.sqrt(Math.max(0, 1 - u * u))) / i0b;
+            h[i] = fc * KaiserSinc.sinc(fc * m) * SpecialFunctions.besselI0(beta * Math.sqrt(Math.max(0, 1 - u * u))) / i0b;
             h[n - 1 - i] = h[i];
         }
         for (int i = 0; i < n; i++) {

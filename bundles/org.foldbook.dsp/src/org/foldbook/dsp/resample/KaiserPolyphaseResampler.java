@@ -1,5 +1,7 @@
 package org.foldbook.dsp.resample;
 
+import org.foldbook.dsp.SpecialFunctions;
+
 import java.util.Objects;
 
 import org.foldbook.dsp.Check;
@@ -65,14 +67,14 @@ public final class KaiserPolyphaseResampler implements Resampler {
         }
         Check.inRange("cutoff", cutoff, Double.MIN_NORMAL, 1.0);
         double alpha = (n - 1) / 2.0;
-        double i0b = Bessel.i0(beta);
+        double i0b = SpecialFunctions.besselI0(beta);
         double[] h = new double[n];
         double sum = 0;
         // symmetric: compute the first half and the centre, mirror the rest
         for (int i = 0; i <= n / 2; i++) {
             double m = i - alpha;
             double u = alpha == 0 ? 0 : m / alpha;
-            double w = Bessel.i0(beta * Math.sqrt(Math.max(0.0, 1.0 - u * u))) / i0b;
+            double w = SpecialFunctions.besselI0(beta * Math.sqrt(Math.max(0.0, 1.0 - u * u))) / i0b;
             h[i] = cutoff * KaiserSinc.sinc(cutoff * m) * w;
             h[n - 1 - i] = h[i];
         }

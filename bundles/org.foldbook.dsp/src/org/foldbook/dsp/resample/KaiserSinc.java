@@ -1,5 +1,7 @@
 package org.foldbook.dsp.resample;
 
+import org.foldbook.dsp.SpecialFunctions;
+
 /**
  * Kaiser-windowed sinc interpolation kernel of half width {@code W} (input samples):
  * h(τ) = sinc(τ) · I0(β·√(1 − (τ/W)²)) / I0(β) for |τ| ≤ W, 0 outside; sinc(τ) = sin(πτ)/(πτ).
@@ -21,7 +23,7 @@ final class KaiserSinc {
         }
         this.halfWidth = halfWidth;
         this.beta = beta;
-        this.i0Beta = Bessel.i0(beta);
+        this.i0Beta = SpecialFunctions.besselI0(beta);
     }
 
     int halfWidth() {
@@ -39,7 +41,7 @@ final class KaiserSinc {
         if (g < 0) {
             return 0.0;
         }
-        return sinc(tau) * Bessel.i0(beta * Math.sqrt(g)) / i0Beta;
+        return sinc(tau) * SpecialFunctions.besselI0(beta * Math.sqrt(g)) / i0Beta;
     }
 
     /** sin(πτ)/(πτ), exactly 0 at nonzero integers and 1 at 0. */
