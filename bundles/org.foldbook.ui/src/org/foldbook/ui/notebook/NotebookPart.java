@@ -121,7 +121,7 @@ public class NotebookPart {
         SashForm right = new SashForm(outer, SWT.VERTICAL);
         createDetails(right);
         createFindings(right);
-        right.setWeights(66, 34);
+        right.setWeights(60, 40);
         outer.setWeights(34, 66);
 
         if (current != null) {
@@ -246,7 +246,9 @@ public class NotebookPart {
                 default -> 900;
             });
         }
-        GridDataFactory.fillDefaults().span(4, 1).grab(true, true).hint(SWT.DEFAULT, 60).applyTo(findings);
+        // room for three findings without scrolling: the demo alone has two
+        int threeRows = findings.getHeaderHeight() + 3 * findings.getItemHeight() + 2 * findings.getBorderWidth();
+        GridDataFactory.fillDefaults().span(4, 1).grab(true, true).hint(SWT.DEFAULT, threeRows).applyTo(findings);
         findingText = new Label(box, SWT.WRAP);
         GridDataFactory.fillDefaults().span(4, 1).grab(true, false).hint(400, SWT.DEFAULT).applyTo(findingText);
         findings.addListener(SWT.Selection, e -> showFindingText(findings.getSelectionIndex()));
