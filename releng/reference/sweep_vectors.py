@@ -21,7 +21,7 @@ import sys
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 REPO = os.path.dirname(os.path.dirname(HERE))
-OUT = os.path.join(REPO, "bundles", "org.foldbook.dsp.tests", "resources", "reference", "sweep")
+OUT = os.path.join(REPO, "bundles", "org.foldbook.sweep.tests", "resources", "reference", "sweep")
 PEER = os.environ.get("PEER_SWEEP",
                       os.path.join(os.path.dirname(REPO), "shared", "peer", "peer_sweep.py"))
 

@@ -12,15 +12,15 @@ import org.foldbook.dsp.filter.AnalogFilter;
 import org.foldbook.dsp.filter.AnalogLowPass;
 import org.foldbook.dsp.filter.BesselNormalization;
 import org.foldbook.dsp.resample.ModelledChannel;
-import org.foldbook.dsp.sweep.FoldPreview;
-import org.foldbook.dsp.sweep.RateLadder;
-import org.foldbook.dsp.sweep.RateResult;
-import org.foldbook.dsp.sweep.Resampling;
-import org.foldbook.dsp.sweep.SourceSpectrum;
-import org.foldbook.dsp.sweep.SpectrumSettings;
-import org.foldbook.dsp.sweep.SweepEngine;
-import org.foldbook.dsp.sweep.SweepProgress;
-import org.foldbook.dsp.sweep.SweepResult;
+import org.foldbook.sweep.FoldPreview;
+import org.foldbook.sweep.RateLadder;
+import org.foldbook.sweep.RateResult;
+import org.foldbook.sweep.Resampling;
+import org.foldbook.sweep.SourceSpectrum;
+import org.foldbook.sweep.SpectrumSettings;
+import org.foldbook.sweep.SweepEngine;
+import org.foldbook.sweep.SweepProgress;
+import org.foldbook.sweep.SweepResult;
 
 /** {@code foldbook sweep}: reads a recording and a rate grid, runs the sweep, writes JSON or CSV. */
 final class SweepCommand {

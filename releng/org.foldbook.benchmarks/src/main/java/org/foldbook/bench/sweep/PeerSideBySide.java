@@ -14,14 +14,14 @@ import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
-import org.foldbook.dsp.sweep.ObservedPeak;
-import org.foldbook.dsp.sweep.RateLadder;
-import org.foldbook.dsp.sweep.RateResult;
-import org.foldbook.dsp.sweep.Resampling;
-import org.foldbook.dsp.sweep.SpectrumSettings;
-import org.foldbook.dsp.sweep.SweepEngine;
-import org.foldbook.dsp.sweep.SweepProgress;
-import org.foldbook.dsp.sweep.SweepResult;
+import org.foldbook.sweep.ObservedPeak;
+import org.foldbook.sweep.RateLadder;
+import org.foldbook.sweep.RateResult;
+import org.foldbook.sweep.Resampling;
+import org.foldbook.sweep.SpectrumSettings;
+import org.foldbook.sweep.SweepEngine;
+import org.foldbook.sweep.SweepProgress;
+import org.foldbook.sweep.SweepResult;
 
 /**
  * Side-by-side run of Foldbook's sweep and the scipy peer (shared/peer/peer_sweep.py), by the peer's

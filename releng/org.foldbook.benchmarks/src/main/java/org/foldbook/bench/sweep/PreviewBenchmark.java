@@ -2,15 +2,15 @@ package org.foldbook.bench.sweep;
 
 import java.util.concurrent.TimeUnit;
 
-import org.foldbook.dsp.sweep.FoldPreview;
-import org.foldbook.dsp.sweep.RateLadder;
-import org.foldbook.dsp.sweep.RateResult;
-import org.foldbook.dsp.sweep.RateStep;
-import org.foldbook.dsp.sweep.Resampling;
-import org.foldbook.dsp.sweep.SourceSpectrum;
-import org.foldbook.dsp.sweep.SpectrumSettings;
-import org.foldbook.dsp.sweep.SweepEngine;
-import org.foldbook.dsp.sweep.SweepProgress;
+import org.foldbook.sweep.FoldPreview;
+import org.foldbook.sweep.RateLadder;
+import org.foldbook.sweep.RateResult;
+import org.foldbook.sweep.RateStep;
+import org.foldbook.sweep.Resampling;
+import org.foldbook.sweep.SourceSpectrum;
+import org.foldbook.sweep.SpectrumSettings;
+import org.foldbook.sweep.SweepEngine;
+import org.foldbook.sweep.SweepProgress;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;

@@ -3,12 +3,12 @@ package org.foldbook.bench.sweep;
 import java.util.Random;
 import java.util.concurrent.TimeUnit;
 
-import org.foldbook.dsp.sweep.RateLadder;
-import org.foldbook.dsp.sweep.Resampling;
-import org.foldbook.dsp.sweep.SpectrumSettings;
-import org.foldbook.dsp.sweep.SweepEngine;
-import org.foldbook.dsp.sweep.SweepProgress;
-import org.foldbook.dsp.sweep.SweepResult;
+import org.foldbook.sweep.RateLadder;
+import org.foldbook.sweep.Resampling;
+import org.foldbook.sweep.SpectrumSettings;
+import org.foldbook.sweep.SweepEngine;
+import org.foldbook.sweep.SweepProgress;
+import org.foldbook.sweep.SweepResult;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;

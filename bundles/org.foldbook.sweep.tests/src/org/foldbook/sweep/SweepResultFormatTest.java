@@ -1,0 +1,102 @@
+package org.foldbook.sweep;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+
+/** JSON (RFC 8259) and CSV forms of a sweep result. */
+class SweepResultFormatTest {
+
+    static SweepResult sample() {
+        double[] x = Tones.of(1 << 15, 19, new double[] {1.5, 4.0}, new double[] {1, 0.5}, 1e-4, 9);
+        try (SweepEngine e = new SweepEngine(1)) {
+            return e.run(x, RateLadder.ofRates(19, new double[] {19, 9.5, 1.9}, 100), Resampling.bare(),
+                    SpectrumSettings.DEFAULT, SweepProgress.NONE).withBand(0, 0.5);
+        }
+    }
+
+    @Test
+    @DisplayName("JSON: per rate index, up, down, effective rate, peaks with frequency, level, verdict, source peak")
+    void jsonShape() {
+        SweepResult r = sample();
+        Map<String, Object> root = MiniJson.obj(MiniJson.parse(r.toJson()));
+        assertEquals("foldbook-sweep", root.get("format"));
+        assertEquals(1.0, root.get("version"));
+        assertEquals("bare", root.get("mode"));
+        Map<String, Object> src = MiniJson.obj(root.get("source"));
+        assertEquals(19.0, src.get("rate"));
+        assertEquals(2, MiniJson.arr(src.get("peaks")).size());
+        List<Object> rates = MiniJson.arr(root.get("rates"));
+        assertEquals(3, rates.size());
+        Set<String> verdicts = Set.of("survives", "folds", "suppressed", "merges", "unexplained");
+        for (int i = 0; i < rates.size(); i++) {
+            Map<String, Object> rate = MiniJson.obj(rates.get(i));
+            assertEquals((double) i, rate.get("index"));
+            RateStep st = r.rates().get(i).step();
+            assertEquals((double) st.up(), rate.get("up"));
+            assertEquals((double) st.down(), rate.get("down"));
+            assertEquals(st.effectiveRate(), (Double) rate.get("rate"), 0.0, "exact round trip of the rate");
+            for (Object o : MiniJson.arr(rate.get("peaks"))) {
+                Map<String, Object> p = MiniJson.obj(o);
+                assertTrue(p.get("frequency") instanceof Double);
+                assertTrue(p.get("levelDb") instanceof Double);
+                assertTrue(verdicts.contains(p.get("verdict")), String.valueOf(p.get("verdict")));
+                if (p.get("verdict").equals("unexplained")) {
+                    assertNull(p.get("sourcePeak"));
+                } else {
+                    assertTrue(p.get("sourcePeak") instanceof Double);
+                }
+            }
+            assertEquals(2, MiniJson.arr(rate.get("sources")).size());
+        }
+        // 1.5 Hz at 1.9 S/s: folds to 0.4 Hz (common practice)
+        Map<String, Object> last = MiniJson.obj(MiniJson.arr(MiniJson.obj(rates.get(2)).get("sources")).get(0));
+        assertEquals("folds", last.get("verdict"));
+        assertEquals(0.4, (Double) last.get("apparentFrequency"), 0.01);
+        Map<String, Object> summary = MiniJson.obj(root.get("summary"));
+        assertEquals(2, MiniJson.arr(summary.get("peaks")).size());
+        Map<String, Object> band = MiniJson.obj(summary.get("band"));
+        assertEquals(0.5, band.get("high"));
+        // band 0..0.5 Hz: at 9.5 S/s the 4 Hz tone stays put; at 1.9 S/s 1.5 Hz folds to 0.4 Hz, into the band
+        assertEquals(9.5, (Double) band.get("lowestAliasFreeRate"), 1e-12);
+    }
+
+    @Test
+    @DisplayName("JSON writer: escapes, NaN as null, shortest round-trip doubles (RFC 8259)")
+    void writerBasics() {
+        String s = new JsonWriter().beginObject().member("a\"b\\\n", "x\u0001y").member("nan", Double.NaN)
+                .member("third", 1.0 / 3).member("n", 42L).name("list").beginArray().value(true).value((String) null)
+                .endArray().endObject().toString();
+        assertEquals("{\"a\\\"b\\\\\\n\":\"x\\u0001y\",\"nan\":null,\"third\":0.3333333333333333,\"n\":42,"
+                + "\"list\":[true,null]}", s);
+        Map<String, Object> m = MiniJson.obj(MiniJson.parse(s));
+        assertEquals(1.0 / 3, m.get("third"));
+        assertThrows(IllegalArgumentException.class, () -> MiniJson.parse("{\"a\":1,}"));
+    }
+
+    @Test
+    @DisplayName("CSV: header and one row per seen peak plus one per suppressed or merged source peak")
+    void csvRows() {
+        SweepResult r = sample();
+        String[] lines = r.toCsv().split("\n");
+        assertEquals("index,up,down,rate_hz,frequency_hz,level_db,verdict,source_peak,gain_db", lines[0]);
+        long expected = 0;
+        for (RateResult rr : r.rates()) {
+            expected += rr.observed().size();
+            expected += rr.fates().stream()
+                    .filter(f -> f.verdict() == Verdict.SUPPRESSED || f.verdict() == Verdict.MERGES).count();
+        }
+        assertEquals(expected, lines.length - 1);
+        for (int i = 1; i < lines.length; i++) {
+            assertEquals(9, lines[i].split(",", -1).length, lines[i]);
+        }
+    }
+}

@@ -1,0 +1,275 @@
+package org.foldbook.sweep;
+
+import java.util.Map;
+import java.util.Objects;
+import java.util.concurrent.ConcurrentHashMap;
+
+import org.foldbook.dsp.filter.AnalogFilter;
+import org.foldbook.dsp.filter.SecondOrderSections;
+import org.foldbook.dsp.resample.BareSampler;
+import org.foldbook.dsp.resample.IdealDecimator;
+import org.foldbook.dsp.resample.KaiserPolyphaseResampler;
+import org.foldbook.dsp.resample.ModelledChannel;
+import org.foldbook.dsp.resample.ModelledChannelResampler;
+import org.foldbook.dsp.resample.Resampler;
+
+/**
+ * One way of taking the recording to a lower rate in a sweep: which re-sampler serves a rate, what is
+ * done once to the whole recording first, and the power gain |H(f)|² the way applies to source content at
+ * f before it is sampled (for the spectral preview and for the expected attenuation in verdicts).
+ * Implementations are immutable and thread-safe.
+ */
+public interface Resampling {
+
+    /** Short name used in JSON and on the command line, e.g. {@code bare}. */
+    String name();
+
+    /**
+     * Work done once per sweep on the whole recording, before any rate (e.g. the modelled analog filter,
+     * realised at the source rate). Returns {@code source} itself when there is none, else one new array:
+     * the only copy of the recording a sweep ever makes.
+     */
+    default double[] prepare(double[] source, double sourceRate) {
+        return source;
+    }
+
+    /** The re-sampler for one rate (designed here, so its cost counts as part of the sweep). */
+    Resampler forRate(RateStep step);
+
+    /** |H(f)|² applied to source content at {@code frequencyHz} on its way to {@code step}'s rate. */
+    double powerGain(double frequencyHz, RateStep step);
+
+    /** Mode 1: a digitizer with no anti-alias filter (windowed-sinc evaluation, see {@link BareSampler}). */
+    static Resampling bare() {
+        return Bare.INSTANCE;
+    }
+
+    /**
+     * Mode 2 with an analog filter only: {@link #modelledChannel} of {@code ModelledChannel.none().withAnalog(filter)}.
+     */
+    static Resampling modelledFilter(AnalogFilter filter) {
+        return new ModelledFilter(ModelledChannel.none().withAnalog(Objects.requireNonNull(filter, "filter")));
+    }
+
+    /**
+     * Mode 2: the channel's own modelled chain ({@link ModelledChannel}: analog filters, a digitizer's
+     * built-in filter, a camera's exposure), then sampled bare. The analog filters are realised at the source
+     * rate ({@link AnalogFilter#toDigital}, bilinear pre-warped at each cutoff) and run once over the whole
+     * recording for all rates; the digitizer filter and exposure depend on the rate and go into each rate's
+     * sampler ({@link ModelledChannelResampler}). Valid only as far as the source rate's headroom allows: the
+     * realisation follows the analog model closely well below the source Nyquist frequency, not near it.
+     */
+    static Resampling modelledChannel(ModelledChannel channel) {
+        return new ModelledFilter(Objects.requireNonNull(channel, "channel"));
+    }
+
+    /**
+     * Mode 3: what a correct digital down-sampler gives ({@link IdealDecimator}: multi-stage polyphase, pass
+     * band to 0.45·fs, at least 100 dB from fs/2 on).
+     */
+    static Resampling idealDecimator() {
+        return new Ideal(IdealDecimator.Spec.DEFAULT);
+    }
+
+    /** Mode 3 with another pass band / stop band / attenuation. */
+    static Resampling idealDecimator(IdealDecimator.Spec spec) {
+        return new Ideal(spec);
+    }
+
+    /** The ideal decimator; designs are kept per ratio, as the preview asks for the same rates again. */
+    final class Ideal implements Resampling {
+        private final IdealDecimator.Spec spec;
+        private final java.util.Map<Long, IdealDecimator> designs = new java.util.concurrent.ConcurrentHashMap<>();
+
+        Ideal(IdealDecimator.Spec spec) {
+            this.spec = Objects.requireNonNull(spec, "spec");
+        }
+
+        public IdealDecimator.Spec spec() {
+            return spec;
+        }
+
+        @Override
+        public String name() {
+            return "ideal";
+        }
+
+        private IdealDecimator design(RateStep step) {
+            return designs.computeIfAbsent((long) step.up() << 32 | step.down(),
+                    k -> IdealDecimator.of(step.ratio(), spec));
+        }
+
+        @Override
+        public Resampler forRate(RateStep step) {
+            return design(step);
+        }
+
+        /**
+         * |H|² from the stated response, not the design: 1 in the pass band (ripple ≤ 0.001 dB), the stated
+         * attenuation from the stop edge on (the design meets it or does better), log-linear between. Exact
+         * evaluation ({@link IdealDecimator#magnitude}) costs the prototype's length per frequency, too slow
+         * for a preview of thousands of bins.
+         */
+        @Override
+        public double powerGain(double frequencyHz, RateStep step) {
+            double fs = Math.min(step.effectiveRate(), step.sourceRate());
+            double u = Math.abs(frequencyHz) / fs;
+            if (u <= spec.passFraction()) {
+                return 1.0;
+            }
+            double t = Math.min(1.0, (u - spec.passFraction()) / (spec.stopFraction() - spec.passFraction()));
+            return Math.pow(10, -spec.attenuationDb() * t / 10);
+        }
+    }
+
+    /**
+     * The peer-compatible filtered mode: scipy.signal.resample_poly's default design (Kaiser β = 5,
+     * 20·max(up, down)+1 taps, see {@link KaiserPolyphaseResampler#resamplePolyDefaults}), so its per-rate
+     * peaks can be compared with the peer's mode b bin for bin.
+     */
+    static Resampling peerResamplePoly() {
+        return PeerResamplePoly.INSTANCE;
+    }
+
+    /** scipy's resample_poly defaults. */
+    final class PeerResamplePoly implements Resampling {
+        static final PeerResamplePoly INSTANCE = new PeerResamplePoly();
+        // |H| of that design in dB at fractions of the new rate (scipy.signal.freqz for R = 20, as
+        // documented with KaiserPolyphaseResampler); beyond 0.6 the stop band lies near -65 dB.
+        private static final double[] AT = {0.0, 0.40, 0.45, 0.50, 0.55, 0.60, 0.65};
+        private static final double[] DB = {0.0, 0.0, -0.66, -6.0, -22.6, -55.0, -65.0};
+
+        private PeerResamplePoly() {
+        }
+
+        @Override
+        public String name() {
+            return "peer-poly";
+        }
+
+        @Override
+        public Resampler forRate(RateStep step) {
+            return KaiserPolyphaseResampler.resamplePolyDefaults(step.ratio());
+        }
+
+        /** Piecewise-linear dB model of the design's response, tabulated at fractions of the new rate. */
+        @Override
+        public double powerGain(double frequencyHz, RateStep step) {
+            if (step.up() == 1 && step.down() == 1) {
+                return 1.0;
+            }
+            double u = Math.abs(frequencyHz) / step.effectiveRate();
+            if (u >= AT[AT.length - 1]) {
+                return Math.pow(10, DB[DB.length - 1] / 10);
+            }
+            int i = 1;
+            while (u > AT[i]) {
+                i++;
+            }
+            double t = (u - AT[i - 1]) / (AT[i] - AT[i - 1]);
+            double db = DB[i - 1] + t * (DB[i] - DB[i - 1]);
+            return Math.pow(10, db / 10);
+        }
+    }
+
+    /** The bare sampler. */
+    final class Bare implements Resampling {
+        static final Bare INSTANCE = new Bare();
+
+        private Bare() {
+        }
+
+        @Override
+        public String name() {
+            return "bare";
+        }
+
+        @Override
+        public Resampler forRate(RateStep step) {
+            return BareSampler.of(step.ratio());
+        }
+
+        /** 1: nothing is filtered (the interpolator's own roll-off above 0.39·fs0 is not modelled). */
+        @Override
+        public double powerGain(double frequencyHz, RateStep step) {
+            return 1.0;
+        }
+    }
+
+    /** The modelled channel: analog part once at the source rate, the rest per rate. */
+    final class ModelledFilter implements Resampling {
+        private final ModelledChannel channel;
+        private final boolean analogOnly;
+        private final Map<Double, SecondOrderSections> realised = new ConcurrentHashMap<>();
+        private final Map<RateStep, ModelledChannelResampler> samplers = new ConcurrentHashMap<>();
+
+        ModelledFilter(ModelledChannel channel) {
+            this.channel = channel;
+            this.analogOnly = channel.digitizerFilter() == null && !(channel.exposureSeconds() > 0);
+        }
+
+        public ModelledChannel channel() {
+            return channel;
+        }
+
+        @Override
+        public String name() {
+            return "modelled";
+        }
+
+        /** The analog filters in series, realised at {@code sourceRate}; null when there are none. */
+        private SecondOrderSections realisedAt(double sourceRate) {
+            if (channel.analogFilters().isEmpty()) {
+                return null;
+            }
+            return realised.computeIfAbsent(sourceRate, fs -> {
+                SecondOrderSections all = null;
+                for (AnalogFilter a : channel.analogFilters()) {
+                    SecondOrderSections s = a.toDigital(fs);
+                    all = all == null ? s : all.followedBy(s);
+                }
+                return all;
+            });
+        }
+
+        @Override
+        public double[] prepare(double[] source, double sourceRate) {
+            SecondOrderSections sos = realisedAt(sourceRate);
+            if (sos == null) {
+                return source;
+            }
+            double[] y = new double[source.length];
+            sos.newFilter().filter(source, 0, y, 0, source.length);
+            return y;
+        }
+
+        @Override
+        public Resampler forRate(RateStep step) {
+            if (analogOnly) {
+                return BareSampler.of(step.ratio());
+            }
+            return samplers.computeIfAbsent(step, st -> ModelledChannelResampler.of(st.ratio(), st.sourceRate(),
+                    channel, ModelledChannelResampler.AnalogStage.ALREADY_APPLIED));
+        }
+
+        /**
+         * |H(f)|² this mode really applies: the analog filters' realisation at the source rate (it follows
+         * the analog models well below the source Nyquist frequency and falls faster near it), times the
+         * digitizer filter and exposure as realised for the rate.
+         */
+        @Override
+        public double powerGain(double frequencyHz, RateStep step) {
+            SecondOrderSections sos = realisedAt(step.sourceRate());
+            double m = sos == null ? 1.0 : sos.magnitude(frequencyHz);
+            if (!analogOnly) {
+                ModelledChannelResampler r = (ModelledChannelResampler) forRate(step);
+                double analogModel = 1;
+                for (AnalogFilter a : channel.analogFilters()) {
+                    analogModel *= a.magnitude(frequencyHz);
+                }
+                m *= analogModel > 0 ? r.magnitude(frequencyHz) / analogModel : 0.0;
+            }
+            return m * m;
+        }
+    }
+}

@@ -1,0 +1,184 @@
+package org.foldbook.sweep;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * The outcome of a sweep over a rate ladder in one mode: the source peaks, what each rate shows, and the
+ * summaries. Immutable; {@link #toJson()} and {@link #toCsv()} give the forms the command line and the UI
+ * read.
+ *
+ * @param mode          the re-sampling mode (or preview) that produced it
+ * @param sourceRate    recording rate, S/s
+ * @param sourceSamples recording length
+ * @param sourceBinWidth frequency step of the source spectrum, Hz
+ * @param sources       source peaks in frequency order
+ * @param rates         one result per ladder rate, in ladder order
+ * @param band          the band summary, if a band was asked for
+ */
+public record SweepResult(String mode, double sourceRate, long sourceSamples, double sourceBinWidth,
+        List<SourcePeak> sources, List<RateResult> rates, Optional<BandSummary> band) {
+
+    /** Version of the JSON/CSV layout; raise it when a field changes meaning. */
+    public static final int FORMAT_VERSION = 1;
+
+    public SweepResult {
+        sources = List.copyOf(sources);
+        rates = List.copyOf(rates);
+    }
+
+    /** Computes the band summary for [low, high] and returns a result carrying it. */
+    public SweepResult withBand(double low, double high) {
+        BandSummary b = new BandSummary(low, high, Double.NaN);
+        return new SweepResult(mode, sourceRate, sourceSamples, sourceBinWidth, sources, rates,
+                Optional.of(new BandSummary(low, high, lowestAliasFreeRate(b))));
+    }
+
+    /** Rates from highest to lowest (ladder order is kept in {@link #rates()}). */
+    private List<RateResult> descending() {
+        List<RateResult> d = new ArrayList<>(rates);
+        d.sort(Comparator.comparingDouble((RateResult r) -> -r.step().effectiveRate()));
+        return d;
+    }
+
+    /** Per source peak: lowest rate it is still true at, and the rate where it first folds. */
+    public List<PeakSummary> peakSummaries() {
+        List<RateResult> d = descending();
+        List<PeakSummary> out = new ArrayList<>();
+        for (SourcePeak s : sources) {
+            double lowestTrue = Double.NaN;
+            for (RateResult r : d) {
+                if (r.fate(s.id()).verdict() != Verdict.SURVIVES) {
+                    break;
+                }
+                lowestTrue = r.step().effectiveRate();
+            }
+            double firstFold = Double.NaN;
+            for (RateResult r : d) {
+                if (r.fate(s.id()).verdict() == Verdict.FOLDS) {
+                    firstFold = r.step().effectiveRate();
+                    break;
+                }
+            }
+            out.add(new PeakSummary(s.id(), s.frequency(), lowestTrue, firstFold));
+        }
+        return out;
+    }
+
+    private double lowestAliasFreeRate(BandSummary b) {
+        double lowest = Double.NaN;
+        for (RateResult r : descending()) {
+            double fs = r.step().effectiveRate();
+            if (b.high() > fs / 2) {
+                break;
+            }
+            boolean clean = true;
+            for (SourceFate f : r.fates()) {
+                SourcePeak s = sources.get(f.sourcePeak());
+                boolean folded = VerdictClassifier.foldOrder(s.frequency(), fs) != 0;
+                boolean seen = f.verdict() == Verdict.FOLDS || (f.verdict() == Verdict.MERGES && folded);
+                if (seen && f.apparentFrequency() >= b.low() - sourceBinWidth / 2
+                        && f.apparentFrequency() <= b.high() + sourceBinWidth / 2) {
+                    clean = false;
+                    break;
+                }
+            }
+            if (!clean) {
+                break;
+            }
+            lowest = fs;
+        }
+        return lowest;
+    }
+
+    /** The JSON form (one object; layout described in the package documentation). */
+    public String toJson() {
+        JsonWriter w = new JsonWriter().beginObject();
+        w.member("format", "foldbook-sweep").member("version", FORMAT_VERSION).member("mode", mode);
+        w.name("source").beginObject().member("rate", sourceRate).member("samples", sourceSamples)
+                .member("binWidth", sourceBinWidth);
+        w.name("peaks").beginArray();
+        for (SourcePeak s : sources) {
+            w.beginObject().member("id", s.id()).member("frequency", s.frequency()).member("levelDb", s.levelDb())
+                    .endObject();
+        }
+        w.endArray().endObject();
+        w.name("rates").beginArray();
+        for (RateResult r : rates) {
+            RateStep st = r.step();
+            w.beginObject().member("index", st.index()).member("up", st.up()).member("down", st.down())
+                    .member("rate", st.effectiveRate()).member("samples", r.outputSamples())
+                    .member("binWidth", r.binWidth());
+            w.name("peaks").beginArray();
+            for (ObservedPeak p : r.observed()) {
+                w.beginObject().member("frequency", p.frequency()).member("levelDb", p.levelDb())
+                        .member("verdict", p.verdict().key());
+                w.name("sourcePeak");
+                if (p.sourcePeak() < 0) {
+                    w.value((String) null);
+                } else {
+                    w.value(p.sourcePeak());
+                }
+                w.member("gainDb", p.gainDb()).endObject();
+            }
+            w.endArray();
+            w.name("sources").beginArray();
+            for (SourceFate f : r.fates()) {
+                w.beginObject().member("sourcePeak", f.sourcePeak()).member("verdict", f.verdict().key())
+                        .member("apparentFrequency", f.apparentFrequency())
+                        .member("observedFrequency", f.observedFrequency()).member("gainDb", f.gainDb());
+                if (f.mergedInto() >= 0) {
+                    w.member("mergedInto", f.mergedInto());
+                }
+                w.endObject();
+            }
+            w.endArray().endObject();
+        }
+        w.endArray();
+        w.name("summary").beginObject().name("peaks").beginArray();
+        for (PeakSummary s : peakSummaries()) {
+            w.beginObject().member("sourcePeak", s.sourcePeak()).member("frequency", s.frequency())
+                    .member("lowestTrueRate", s.lowestTrueRate()).member("firstFoldRate", s.firstFoldRate())
+                    .endObject();
+        }
+        w.endArray();
+        if (band.isPresent()) {
+            BandSummary b = band.get();
+            w.name("band").beginObject().member("low", b.low()).member("high", b.high())
+                    .member("lowestAliasFreeRate", b.lowestAliasFreeRate()).endObject();
+        }
+        w.endObject();
+        return w.endObject().toString();
+    }
+
+    /**
+     * The CSV form: a header, then one row per peak seen at each rate and one per source peak that is not
+     * seen on its own there (suppressed or merged; frequency = where it would appear, level empty).
+     */
+    public String toCsv() {
+        StringBuilder b = new StringBuilder(
+                "index,up,down,rate_hz,frequency_hz,level_db,verdict,source_peak,gain_db\n");
+        for (RateResult r : rates) {
+            RateStep st = r.step();
+            String head = st.index() + "," + st.up() + "," + st.down() + "," + num(st.effectiveRate()) + ",";
+            for (ObservedPeak p : r.observed()) {
+                b.append(head).append(num(p.frequency())).append(',').append(num(p.levelDb())).append(',')
+                        .append(p.verdict().key()).append(',').append(p.sourcePeak() < 0 ? "" : p.sourcePeak())
+                        .append(',').append(num(p.gainDb())).append('\n');
+            }
+            for (SourceFate f : r.fates()) {
+                if (f.verdict() == Verdict.SUPPRESSED || f.verdict() == Verdict.MERGES) {
+                    b.append(head).append(num(f.apparentFrequency())).append(",,").append(f.verdict().key())
+                            .append(',').append(f.sourcePeak()).append(',').append(num(f.gainDb())).append('\n');
+                }
+            }
+        }
+        return b.toString();
+    }
+
+    private static String num(double v) {
+        return Double.isFinite(v) ? Double.toString(v) : "";
+    }
+}

@@ -1,0 +1,34 @@
+/**
+ * Stepped-rate simulation: re-sample a stored high-rate recording at a ladder of lower rates and tell,
+ * per spectral peak, whether it survives, folds (and where), is suppressed or merges.
+ *
+ * <h2>Pieces</h2>
+ * <ul>
+ * <li>{@link org.foldbook.sweep.RateLadder}: requested rates (list, linear, geometric) snapped to exact
+ * ratios up/down, or a grid file of {@code index up down fs} lines read verbatim;</li>
+ * <li>{@link org.foldbook.sweep.Resampling}: the modes — bare sampler, the channel's modelled chain,
+ * ideal decimator, scipy-resample_poly-compatible — each with its |H(f)|²;</li>
+ * <li>{@link org.foldbook.sweep.SweepEngine}: fixed thread pool over rates; per rate re-sample →
+ * Welch PSD (streamed, {@link org.foldbook.sweep.StreamingWelch}) → peaks → verdicts;</li>
+ * <li>{@link org.foldbook.sweep.FoldPreview}: the same verdicts from the source PSD alone, without
+ * touching samples;</li>
+ * <li>{@link org.foldbook.sweep.VerdictClassifier}: the verdict rules;
+ * {@link org.foldbook.sweep.SweepResult}: the immutable result with summaries, JSON and CSV.</li>
+ * </ul>
+ *
+ * <h2>JSON layout ({@code format = "foldbook-sweep"}, {@code version = 1})</h2>
+ * <pre>
+ * { "format", "version", "mode",
+ *   "source": { "rate", "samples", "binWidth", "peaks": [ { "id", "frequency", "levelDb" } ] },
+ *   "rates": [ { "index", "up", "down", "rate", "samples", "binWidth",
+ *                "peaks":   [ { "frequency", "levelDb", "verdict", "sourcePeak" (id or null), "gainDb" } ],
+ *                "sources": [ { "sourcePeak", "verdict", "apparentFrequency", "observedFrequency", "gainDb",
+ *                               "mergedInto" (only for merges) } ] } ],
+ *   "summary": { "peaks": [ { "sourcePeak", "frequency", "lowestTrueRate", "firstFoldRate" } ],
+ *                "band": { "low", "high", "lowestAliasFreeRate" } (only when asked) } }
+ * </pre>
+ * Frequencies in Hz, rates in S/s, levels in dB re 1 unit²/Hz (PSD density), gains in dB of power per bin
+ * relative to the source peak; verdicts are {@code survives, folds, suppressed, merges, unexplained}; a
+ * number JSON cannot hold (NaN: not seen, never) is {@code null}.
+ */
+package org.foldbook.sweep;
