@@ -26,6 +26,7 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link org.foldbook.model.Experiment#getRig <em>Rig</em>}</li>
  *   <li>{@link org.foldbook.model.Experiment#getRecordings <em>Recordings</em>}</li>
  *   <li>{@link org.foldbook.model.Experiment#getChannels <em>Channels</em>}</li>
+ *   <li>{@link org.foldbook.model.Experiment#getSimulations <em>Simulations</em>}</li>
  * </ul>
  *
  * @see org.foldbook.model.NotebookPackage#getExperiment()
@@ -188,5 +189,20 @@ public interface Experiment extends EObject {
 	 * @generated
 	 */
 	EList<Channel> getChannels();
+
+	/**
+	 * Returns the value of the '<em><b>Simulations</b></em>' containment reference list.
+	 * The list contents are of type {@link org.foldbook.model.SimulationRun}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Finished stepped-rate simulations kept beside the notebook, newest last.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Simulations</em>' containment reference list.
+	 * @see org.foldbook.model.NotebookPackage#getExperiment_Simulations()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<SimulationRun> getSimulations();
 
 } // Experiment

@@ -140,6 +140,15 @@ public interface NotebookFactory extends EFactory {
 	SweepPlan createSweepPlan();
 
 	/**
+	 * Returns a new object of class '<em>Simulation Run</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Simulation Run</em>'.
+	 * @generated
+	 */
+	SimulationRun createSimulationRun();
+
+	/**
 	 * Returns the package supported by this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

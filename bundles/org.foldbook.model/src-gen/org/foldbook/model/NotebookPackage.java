@@ -327,13 +327,22 @@ public interface NotebookPackage extends EPackage {
 	int SENSOR__RESONANCE_HZ = DEVICE_FEATURE_COUNT + 6;
 
 	/**
+	 * The feature id for the '<em><b>Resonance Q</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SENSOR__RESONANCE_Q = DEVICE_FEATURE_COUNT + 7;
+
+	/**
 	 * The number of structural features of the '<em>Sensor</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int SENSOR_FEATURE_COUNT = DEVICE_FEATURE_COUNT + 7;
+	int SENSOR_FEATURE_COUNT = DEVICE_FEATURE_COUNT + 8;
 
 	/**
 	 * The number of operations of the '<em>Sensor</em>' class.
@@ -1145,13 +1154,22 @@ public interface NotebookPackage extends EPackage {
 	int EXPERIMENT__CHANNELS = 7;
 
 	/**
+	 * The feature id for the '<em><b>Simulations</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXPERIMENT__SIMULATIONS = 8;
+
+	/**
 	 * The number of structural features of the '<em>Experiment</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int EXPERIMENT_FEATURE_COUNT = 8;
+	int EXPERIMENT_FEATURE_COUNT = 9;
 
 	/**
 	 * The number of operations of the '<em>Experiment</em>' class.
@@ -1418,13 +1436,31 @@ public interface NotebookPackage extends EPackage {
 	int SWEEP_PLAN__SEGMENT_LENGTH = 6;
 
 	/**
+	 * The feature id for the '<em><b>Band Low Hz</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SWEEP_PLAN__BAND_LOW_HZ = 7;
+
+	/**
+	 * The feature id for the '<em><b>Band High Hz</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SWEEP_PLAN__BAND_HIGH_HZ = 8;
+
+	/**
 	 * The number of structural features of the '<em>Sweep Plan</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int SWEEP_PLAN_FEATURE_COUNT = 7;
+	int SWEEP_PLAN_FEATURE_COUNT = 9;
 
 	/**
 	 * The number of operations of the '<em>Sweep Plan</em>' class.
@@ -1436,6 +1472,88 @@ public interface NotebookPackage extends EPackage {
 	int SWEEP_PLAN_OPERATION_COUNT = 0;
 
 	/**
+	 * The meta object id for the '{@link org.foldbook.model.impl.SimulationRunImpl <em>Simulation Run</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.foldbook.model.impl.SimulationRunImpl
+	 * @see org.foldbook.model.impl.NotebookPackageImpl#getSimulationRun()
+	 * @generated
+	 */
+	int SIMULATION_RUN = 14;
+
+	/**
+	 * The feature id for the '<em><b>Channel</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SIMULATION_RUN__CHANNEL = 0;
+
+	/**
+	 * The feature id for the '<em><b>Path</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SIMULATION_RUN__PATH = 1;
+
+	/**
+	 * The feature id for the '<em><b>Mode</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SIMULATION_RUN__MODE = 2;
+
+	/**
+	 * The feature id for the '<em><b>Source Sha256</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SIMULATION_RUN__SOURCE_SHA256 = 3;
+
+	/**
+	 * The feature id for the '<em><b>Chain Signature</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SIMULATION_RUN__CHAIN_SIGNATURE = 4;
+
+	/**
+	 * The feature id for the '<em><b>Finished On</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SIMULATION_RUN__FINISHED_ON = 5;
+
+	/**
+	 * The number of structural features of the '<em>Simulation Run</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SIMULATION_RUN_FEATURE_COUNT = 6;
+
+	/**
+	 * The number of operations of the '<em>Simulation Run</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SIMULATION_RUN_OPERATION_COUNT = 0;
+
+	/**
 	 * The meta object id for the '{@link org.foldbook.model.FilterFamily <em>Filter Family</em>}' enum.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1443,7 +1561,7 @@ public interface NotebookPackage extends EPackage {
 	 * @see org.foldbook.model.impl.NotebookPackageImpl#getFilterFamily()
 	 * @generated
 	 */
-	int FILTER_FAMILY = 14;
+	int FILTER_FAMILY = 15;
 
 	/**
 	 * The meta object id for the '{@link org.foldbook.model.RecordingFormat <em>Recording Format</em>}' enum.
@@ -1453,7 +1571,7 @@ public interface NotebookPackage extends EPackage {
 	 * @see org.foldbook.model.impl.NotebookPackageImpl#getRecordingFormat()
 	 * @generated
 	 */
-	int RECORDING_FORMAT = 15;
+	int RECORDING_FORMAT = 16;
 
 	/**
 	 * The meta object id for the '{@link org.foldbook.model.RateSpacing <em>Rate Spacing</em>}' enum.
@@ -1463,7 +1581,7 @@ public interface NotebookPackage extends EPackage {
 	 * @see org.foldbook.model.impl.NotebookPackageImpl#getRateSpacing()
 	 * @generated
 	 */
-	int RATE_SPACING = 16;
+	int RATE_SPACING = 17;
 
 	/**
 	 * The meta object id for the '{@link org.foldbook.model.SweepMode <em>Sweep Mode</em>}' enum.
@@ -1473,7 +1591,7 @@ public interface NotebookPackage extends EPackage {
 	 * @see org.foldbook.model.impl.NotebookPackageImpl#getSweepMode()
 	 * @generated
 	 */
-	int SWEEP_MODE = 17;
+	int SWEEP_MODE = 18;
 
 	/**
 	 * The meta object id for the '{@link org.foldbook.model.WindowKind <em>Window Kind</em>}' enum.
@@ -1483,7 +1601,7 @@ public interface NotebookPackage extends EPackage {
 	 * @see org.foldbook.model.impl.NotebookPackageImpl#getWindowKind()
 	 * @generated
 	 */
-	int WINDOW_KIND = 18;
+	int WINDOW_KIND = 19;
 
 
 	/**
@@ -1702,6 +1820,17 @@ public interface NotebookPackage extends EPackage {
 	 * @generated
 	 */
 	EAttribute getSensor_ResonanceHz();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.Sensor#getResonanceQ <em>Resonance Q</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Resonance Q</em>'.
+	 * @see org.foldbook.model.Sensor#getResonanceQ()
+	 * @see #getSensor()
+	 * @generated
+	 */
+	EAttribute getSensor_ResonanceQ();
 
 	/**
 	 * Returns the meta object for class '{@link org.foldbook.model.Amplifier <em>Amplifier</em>}'.
@@ -2287,6 +2416,17 @@ public interface NotebookPackage extends EPackage {
 	EReference getExperiment_Channels();
 
 	/**
+	 * Returns the meta object for the containment reference list '{@link org.foldbook.model.Experiment#getSimulations <em>Simulations</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Simulations</em>'.
+	 * @see org.foldbook.model.Experiment#getSimulations()
+	 * @see #getExperiment()
+	 * @generated
+	 */
+	EReference getExperiment_Simulations();
+
+	/**
 	 * Returns the meta object for class '{@link org.foldbook.model.Channel <em>Channel</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -2548,6 +2688,104 @@ public interface NotebookPackage extends EPackage {
 	EAttribute getSweepPlan_SegmentLength();
 
 	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.SweepPlan#getBandLowHz <em>Band Low Hz</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Band Low Hz</em>'.
+	 * @see org.foldbook.model.SweepPlan#getBandLowHz()
+	 * @see #getSweepPlan()
+	 * @generated
+	 */
+	EAttribute getSweepPlan_BandLowHz();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.SweepPlan#getBandHighHz <em>Band High Hz</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Band High Hz</em>'.
+	 * @see org.foldbook.model.SweepPlan#getBandHighHz()
+	 * @see #getSweepPlan()
+	 * @generated
+	 */
+	EAttribute getSweepPlan_BandHighHz();
+
+	/**
+	 * Returns the meta object for class '{@link org.foldbook.model.SimulationRun <em>Simulation Run</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Simulation Run</em>'.
+	 * @see org.foldbook.model.SimulationRun
+	 * @generated
+	 */
+	EClass getSimulationRun();
+
+	/**
+	 * Returns the meta object for the reference '{@link org.foldbook.model.SimulationRun#getChannel <em>Channel</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Channel</em>'.
+	 * @see org.foldbook.model.SimulationRun#getChannel()
+	 * @see #getSimulationRun()
+	 * @generated
+	 */
+	EReference getSimulationRun_Channel();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.SimulationRun#getPath <em>Path</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Path</em>'.
+	 * @see org.foldbook.model.SimulationRun#getPath()
+	 * @see #getSimulationRun()
+	 * @generated
+	 */
+	EAttribute getSimulationRun_Path();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.SimulationRun#getMode <em>Mode</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Mode</em>'.
+	 * @see org.foldbook.model.SimulationRun#getMode()
+	 * @see #getSimulationRun()
+	 * @generated
+	 */
+	EAttribute getSimulationRun_Mode();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.SimulationRun#getSourceSha256 <em>Source Sha256</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Source Sha256</em>'.
+	 * @see org.foldbook.model.SimulationRun#getSourceSha256()
+	 * @see #getSimulationRun()
+	 * @generated
+	 */
+	EAttribute getSimulationRun_SourceSha256();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.SimulationRun#getChainSignature <em>Chain Signature</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Chain Signature</em>'.
+	 * @see org.foldbook.model.SimulationRun#getChainSignature()
+	 * @see #getSimulationRun()
+	 * @generated
+	 */
+	EAttribute getSimulationRun_ChainSignature();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.SimulationRun#getFinishedOn <em>Finished On</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Finished On</em>'.
+	 * @see org.foldbook.model.SimulationRun#getFinishedOn()
+	 * @see #getSimulationRun()
+	 * @generated
+	 */
+	EAttribute getSimulationRun_FinishedOn();
+
+	/**
 	 * Returns the meta object for enum '{@link org.foldbook.model.FilterFamily <em>Filter Family</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -2785,6 +3023,14 @@ public interface NotebookPackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute SENSOR__RESONANCE_HZ = eINSTANCE.getSensor_ResonanceHz();
+
+		/**
+		 * The meta object literal for the '<em><b>Resonance Q</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SENSOR__RESONANCE_Q = eINSTANCE.getSensor_ResonanceQ();
 
 		/**
 		 * The meta object literal for the '{@link org.foldbook.model.impl.AmplifierImpl <em>Amplifier</em>}' class.
@@ -3235,6 +3481,14 @@ public interface NotebookPackage extends EPackage {
 		EReference EXPERIMENT__CHANNELS = eINSTANCE.getExperiment_Channels();
 
 		/**
+		 * The meta object literal for the '<em><b>Simulations</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference EXPERIMENT__SIMULATIONS = eINSTANCE.getExperiment_Simulations();
+
+		/**
 		 * The meta object literal for the '{@link org.foldbook.model.impl.ChannelImpl <em>Channel</em>}' class.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -3431,6 +3685,80 @@ public interface NotebookPackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute SWEEP_PLAN__SEGMENT_LENGTH = eINSTANCE.getSweepPlan_SegmentLength();
+
+		/**
+		 * The meta object literal for the '<em><b>Band Low Hz</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SWEEP_PLAN__BAND_LOW_HZ = eINSTANCE.getSweepPlan_BandLowHz();
+
+		/**
+		 * The meta object literal for the '<em><b>Band High Hz</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SWEEP_PLAN__BAND_HIGH_HZ = eINSTANCE.getSweepPlan_BandHighHz();
+
+		/**
+		 * The meta object literal for the '{@link org.foldbook.model.impl.SimulationRunImpl <em>Simulation Run</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.foldbook.model.impl.SimulationRunImpl
+		 * @see org.foldbook.model.impl.NotebookPackageImpl#getSimulationRun()
+		 * @generated
+		 */
+		EClass SIMULATION_RUN = eINSTANCE.getSimulationRun();
+
+		/**
+		 * The meta object literal for the '<em><b>Channel</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference SIMULATION_RUN__CHANNEL = eINSTANCE.getSimulationRun_Channel();
+
+		/**
+		 * The meta object literal for the '<em><b>Path</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SIMULATION_RUN__PATH = eINSTANCE.getSimulationRun_Path();
+
+		/**
+		 * The meta object literal for the '<em><b>Mode</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SIMULATION_RUN__MODE = eINSTANCE.getSimulationRun_Mode();
+
+		/**
+		 * The meta object literal for the '<em><b>Source Sha256</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SIMULATION_RUN__SOURCE_SHA256 = eINSTANCE.getSimulationRun_SourceSha256();
+
+		/**
+		 * The meta object literal for the '<em><b>Chain Signature</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SIMULATION_RUN__CHAIN_SIGNATURE = eINSTANCE.getSimulationRun_ChainSignature();
+
+		/**
+		 * The meta object literal for the '<em><b>Finished On</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SIMULATION_RUN__FINISHED_ON = eINSTANCE.getSimulationRun_FinishedOn();
 
 		/**
 		 * The meta object literal for the '{@link org.foldbook.model.FilterFamily <em>Filter Family</em>}' enum.

@@ -20,6 +20,7 @@ package org.foldbook.model;
  *   <li>{@link org.foldbook.model.Sensor#getUsableMinHz <em>Usable Min Hz</em>}</li>
  *   <li>{@link org.foldbook.model.Sensor#getUsableMaxHz <em>Usable Max Hz</em>}</li>
  *   <li>{@link org.foldbook.model.Sensor#getResonanceHz <em>Resonance Hz</em>}</li>
+ *   <li>{@link org.foldbook.model.Sensor#getResonanceQ <em>Resonance Q</em>}</li>
  * </ul>
  *
  * @see org.foldbook.model.NotebookPackage#getSensor()
@@ -180,5 +181,30 @@ public interface Sensor extends Device {
 	 * @generated
 	 */
 	void setResonanceHz(Double value);
+
+	/**
+	 * Returns the value of the '<em><b>Resonance Q</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Quality factor of the mounted resonance (its peak is about 20·log10(Q) dB above the flat band). Unset: the resonance only bounds the band, its peak is not modelled.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Resonance Q</em>' attribute.
+	 * @see #setResonanceQ(Double)
+	 * @see org.foldbook.model.NotebookPackage#getSensor_ResonanceQ()
+	 * @model
+	 * @generated
+	 */
+	Double getResonanceQ();
+
+	/**
+	 * Sets the value of the '{@link org.foldbook.model.Sensor#getResonanceQ <em>Resonance Q</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Resonance Q</em>' attribute.
+	 * @see #getResonanceQ()
+	 * @generated
+	 */
+	void setResonanceQ(Double value);
 
 } // Sensor

@@ -37,13 +37,24 @@ public enum SweepMode implements Enumerator {
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
-	 * Low-pass then re-sample: shows what a filter removes.
+	 * Through the channel's own modelled chain, then re-sample: shows what the chain removes.
 	 * <!-- end-model-doc -->
 	 * @see #FILTERED_VALUE
 	 * @generated
 	 * @ordered
 	 */
-	FILTERED(1, "FILTERED", "FILTERED");
+	FILTERED(1, "FILTERED", "FILTERED"), /**
+	 * The '<em><b>IDEAL DECIMATOR</b></em>' literal object.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * A correct digital down-sampler: what a proper decimation would keep.
+	 * <!-- end-model-doc -->
+	 * @see #IDEAL_DECIMATOR_VALUE
+	 * @generated
+	 * @ordered
+	 */
+	IDEAL_DECIMATOR(2, "IDEAL_DECIMATOR", "IDEAL_DECIMATOR");
 
 	/**
 	 * The '<em><b>BARE SAMPLING</b></em>' literal value.
@@ -64,7 +75,7 @@ public enum SweepMode implements Enumerator {
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
-	 * Low-pass then re-sample: shows what a filter removes.
+	 * Through the channel's own modelled chain, then re-sample: shows what the chain removes.
 	 * <!-- end-model-doc -->
 	 * @see #FILTERED
 	 * @model
@@ -72,6 +83,20 @@ public enum SweepMode implements Enumerator {
 	 * @ordered
 	 */
 	public static final int FILTERED_VALUE = 1;
+
+	/**
+	 * The '<em><b>IDEAL DECIMATOR</b></em>' literal value.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * A correct digital down-sampler: what a proper decimation would keep.
+	 * <!-- end-model-doc -->
+	 * @see #IDEAL_DECIMATOR
+	 * @model
+	 * @generated
+	 * @ordered
+	 */
+	public static final int IDEAL_DECIMATOR_VALUE = 2;
 
 	/**
 	 * An array of all the '<em><b>Sweep Mode</b></em>' enumerators.
@@ -83,6 +108,7 @@ public enum SweepMode implements Enumerator {
 		new SweepMode[] {
 			BARE_SAMPLING,
 			FILTERED,
+			IDEAL_DECIMATOR,
 		};
 
 	/**
@@ -141,6 +167,7 @@ public enum SweepMode implements Enumerator {
 		switch (value) {
 			case BARE_SAMPLING_VALUE: return BARE_SAMPLING;
 			case FILTERED_VALUE: return FILTERED;
+			case IDEAL_DECIMATOR_VALUE: return IDEAL_DECIMATOR;
 		}
 		return null;
 	}

@@ -23,6 +23,8 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link org.foldbook.model.SweepPlan#getModes <em>Modes</em>}</li>
  *   <li>{@link org.foldbook.model.SweepPlan#getWindow <em>Window</em>}</li>
  *   <li>{@link org.foldbook.model.SweepPlan#getSegmentLength <em>Segment Length</em>}</li>
+ *   <li>{@link org.foldbook.model.SweepPlan#getBandLowHz <em>Band Low Hz</em>}</li>
+ *   <li>{@link org.foldbook.model.SweepPlan#getBandHighHz <em>Band High Hz</em>}</li>
  * </ul>
  *
  * @see org.foldbook.model.NotebookPackage#getSweepPlan()
@@ -182,5 +184,55 @@ public interface SweepPlan extends EObject {
 	 * @generated
 	 */
 	void setSegmentLength(int value);
+
+	/**
+	 * Returns the value of the '<em><b>Band Low Hz</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Lower edge of the band of interest, Hz; with bandHighHz the sweep names the lowest rate that keeps it alias-free.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Band Low Hz</em>' attribute.
+	 * @see #setBandLowHz(Double)
+	 * @see org.foldbook.model.NotebookPackage#getSweepPlan_BandLowHz()
+	 * @model
+	 * @generated
+	 */
+	Double getBandLowHz();
+
+	/**
+	 * Sets the value of the '{@link org.foldbook.model.SweepPlan#getBandLowHz <em>Band Low Hz</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Band Low Hz</em>' attribute.
+	 * @see #getBandLowHz()
+	 * @generated
+	 */
+	void setBandLowHz(Double value);
+
+	/**
+	 * Returns the value of the '<em><b>Band High Hz</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Upper edge of the band of interest, Hz.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Band High Hz</em>' attribute.
+	 * @see #setBandHighHz(Double)
+	 * @see org.foldbook.model.NotebookPackage#getSweepPlan_BandHighHz()
+	 * @model
+	 * @generated
+	 */
+	Double getBandHighHz();
+
+	/**
+	 * Sets the value of the '{@link org.foldbook.model.SweepPlan#getBandHighHz <em>Band High Hz</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Band High Hz</em>' attribute.
+	 * @see #getBandHighHz()
+	 * @generated
+	 */
+	void setBandHighHz(Double value);
 
 } // SweepPlan

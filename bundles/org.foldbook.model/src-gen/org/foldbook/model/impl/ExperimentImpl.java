@@ -25,6 +25,7 @@ import org.foldbook.model.Experiment;
 import org.foldbook.model.NotebookPackage;
 import org.foldbook.model.Recording;
 import org.foldbook.model.Rig;
+import org.foldbook.model.SimulationRun;
 
 /**
  * <!-- begin-user-doc -->
@@ -42,6 +43,7 @@ import org.foldbook.model.Rig;
  *   <li>{@link org.foldbook.model.impl.ExperimentImpl#getRig <em>Rig</em>}</li>
  *   <li>{@link org.foldbook.model.impl.ExperimentImpl#getRecordings <em>Recordings</em>}</li>
  *   <li>{@link org.foldbook.model.impl.ExperimentImpl#getChannels <em>Channels</em>}</li>
+ *   <li>{@link org.foldbook.model.impl.ExperimentImpl#getSimulations <em>Simulations</em>}</li>
  * </ul>
  *
  * @generated
@@ -176,6 +178,16 @@ public class ExperimentImpl extends MinimalEObjectImpl.Container implements Expe
 	 * @ordered
 	 */
 	protected EList<Channel> channels;
+
+	/**
+	 * The cached value of the '{@link #getSimulations() <em>Simulations</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getSimulations()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<SimulationRun> simulations;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -383,12 +395,27 @@ public class ExperimentImpl extends MinimalEObjectImpl.Container implements Expe
 	 * @generated
 	 */
 	@Override
+	public EList<SimulationRun> getSimulations() {
+		if (simulations == null) {
+			simulations = new EObjectContainmentEList<SimulationRun>(SimulationRun.class, this, NotebookPackage.EXPERIMENT__SIMULATIONS);
+		}
+		return simulations;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case NotebookPackage.EXPERIMENT__RECORDINGS:
 				return ((InternalEList<?>)getRecordings()).basicRemove(otherEnd, msgs);
 			case NotebookPackage.EXPERIMENT__CHANNELS:
 				return ((InternalEList<?>)getChannels()).basicRemove(otherEnd, msgs);
+			case NotebookPackage.EXPERIMENT__SIMULATIONS:
+				return ((InternalEList<?>)getSimulations()).basicRemove(otherEnd, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -418,6 +445,8 @@ public class ExperimentImpl extends MinimalEObjectImpl.Container implements Expe
 				return getRecordings();
 			case NotebookPackage.EXPERIMENT__CHANNELS:
 				return getChannels();
+			case NotebookPackage.EXPERIMENT__SIMULATIONS:
+				return getSimulations();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -457,6 +486,10 @@ public class ExperimentImpl extends MinimalEObjectImpl.Container implements Expe
 				getChannels().clear();
 				getChannels().addAll((Collection<? extends Channel>)newValue);
 				return;
+			case NotebookPackage.EXPERIMENT__SIMULATIONS:
+				getSimulations().clear();
+				getSimulations().addAll((Collection<? extends SimulationRun>)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -493,6 +526,9 @@ public class ExperimentImpl extends MinimalEObjectImpl.Container implements Expe
 			case NotebookPackage.EXPERIMENT__CHANNELS:
 				getChannels().clear();
 				return;
+			case NotebookPackage.EXPERIMENT__SIMULATIONS:
+				getSimulations().clear();
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -521,6 +557,8 @@ public class ExperimentImpl extends MinimalEObjectImpl.Container implements Expe
 				return recordings != null && !recordings.isEmpty();
 			case NotebookPackage.EXPERIMENT__CHANNELS:
 				return channels != null && !channels.isEmpty();
+			case NotebookPackage.EXPERIMENT__SIMULATIONS:
+				return simulations != null && !simulations.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}

@@ -71,6 +71,7 @@ public class NotebookFactoryImpl extends EFactoryImpl implements NotebookFactory
 			case NotebookPackage.CHANNEL: return createChannel();
 			case NotebookPackage.RECORDING: return createRecording();
 			case NotebookPackage.SWEEP_PLAN: return createSweepPlan();
+			case NotebookPackage.SIMULATION_RUN: return createSimulationRun();
 			default:
 				throw new IllegalArgumentException("The class '" + eClass.getName() + "' is not a valid classifier");
 		}
@@ -263,6 +264,17 @@ public class NotebookFactoryImpl extends EFactoryImpl implements NotebookFactory
 	public SweepPlan createSweepPlan() {
 		SweepPlanImpl sweepPlan = new SweepPlanImpl();
 		return sweepPlan;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public SimulationRun createSimulationRun() {
+		SimulationRunImpl simulationRun = new SimulationRunImpl();
+		return simulationRun;
 	}
 
 	/**

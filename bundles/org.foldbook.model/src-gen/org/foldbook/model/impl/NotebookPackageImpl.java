@@ -30,6 +30,7 @@ import org.foldbook.model.RecordingFormat;
 import org.foldbook.model.Rig;
 import org.foldbook.model.Sensor;
 import org.foldbook.model.SignalChain;
+import org.foldbook.model.SimulationRun;
 import org.foldbook.model.Stage;
 import org.foldbook.model.SweepMode;
 import org.foldbook.model.SweepPlan;
@@ -141,6 +142,13 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 	 * @generated
 	 */
 	private EClass sweepPlanEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass simulationRunEClass = null;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -445,6 +453,16 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 	@Override
 	public EAttribute getSensor_ResonanceHz() {
 		return (EAttribute)sensorEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getSensor_ResonanceQ() {
+		return (EAttribute)sensorEClass.getEStructuralFeatures().get(7);
 	}
 
 	/**
@@ -993,6 +1011,16 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 	 * @generated
 	 */
 	@Override
+	public EReference getExperiment_Simulations() {
+		return (EReference)experimentEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EClass getChannel() {
 		return channelEClass;
 	}
@@ -1233,6 +1261,96 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 	 * @generated
 	 */
 	@Override
+	public EAttribute getSweepPlan_BandLowHz() {
+		return (EAttribute)sweepPlanEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getSweepPlan_BandHighHz() {
+		return (EAttribute)sweepPlanEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getSimulationRun() {
+		return simulationRunEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getSimulationRun_Channel() {
+		return (EReference)simulationRunEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getSimulationRun_Path() {
+		return (EAttribute)simulationRunEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getSimulationRun_Mode() {
+		return (EAttribute)simulationRunEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getSimulationRun_SourceSha256() {
+		return (EAttribute)simulationRunEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getSimulationRun_ChainSignature() {
+		return (EAttribute)simulationRunEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getSimulationRun_FinishedOn() {
+		return (EAttribute)simulationRunEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EEnum getFilterFamily() {
 		return filterFamilyEEnum;
 	}
@@ -1328,6 +1446,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		createEAttribute(sensorEClass, SENSOR__USABLE_MIN_HZ);
 		createEAttribute(sensorEClass, SENSOR__USABLE_MAX_HZ);
 		createEAttribute(sensorEClass, SENSOR__RESONANCE_HZ);
+		createEAttribute(sensorEClass, SENSOR__RESONANCE_Q);
 
 		amplifierEClass = createEClass(AMPLIFIER);
 		createEAttribute(amplifierEClass, AMPLIFIER__GAIN_SETTINGS);
@@ -1390,6 +1509,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		createEReference(experimentEClass, EXPERIMENT__RIG);
 		createEReference(experimentEClass, EXPERIMENT__RECORDINGS);
 		createEReference(experimentEClass, EXPERIMENT__CHANNELS);
+		createEReference(experimentEClass, EXPERIMENT__SIMULATIONS);
 
 		channelEClass = createEClass(CHANNEL);
 		createEAttribute(channelEClass, CHANNEL__NAME);
@@ -1417,6 +1537,16 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		createEAttribute(sweepPlanEClass, SWEEP_PLAN__MODES);
 		createEAttribute(sweepPlanEClass, SWEEP_PLAN__WINDOW);
 		createEAttribute(sweepPlanEClass, SWEEP_PLAN__SEGMENT_LENGTH);
+		createEAttribute(sweepPlanEClass, SWEEP_PLAN__BAND_LOW_HZ);
+		createEAttribute(sweepPlanEClass, SWEEP_PLAN__BAND_HIGH_HZ);
+
+		simulationRunEClass = createEClass(SIMULATION_RUN);
+		createEReference(simulationRunEClass, SIMULATION_RUN__CHANNEL);
+		createEAttribute(simulationRunEClass, SIMULATION_RUN__PATH);
+		createEAttribute(simulationRunEClass, SIMULATION_RUN__MODE);
+		createEAttribute(simulationRunEClass, SIMULATION_RUN__SOURCE_SHA256);
+		createEAttribute(simulationRunEClass, SIMULATION_RUN__CHAIN_SIGNATURE);
+		createEAttribute(simulationRunEClass, SIMULATION_RUN__FINISHED_ON);
 
 		// Create enums
 		filterFamilyEEnum = createEEnum(FILTER_FAMILY);
@@ -1483,6 +1613,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		initEAttribute(getSensor_UsableMinHz(), ecorePackage.getEDoubleObject(), "usableMinHz", null, 0, 1, Sensor.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getSensor_UsableMaxHz(), ecorePackage.getEDoubleObject(), "usableMaxHz", null, 0, 1, Sensor.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getSensor_ResonanceHz(), ecorePackage.getEDoubleObject(), "resonanceHz", null, 0, 1, Sensor.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getSensor_ResonanceQ(), ecorePackage.getEDoubleObject(), "resonanceQ", null, 0, 1, Sensor.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(amplifierEClass, Amplifier.class, "Amplifier", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getAmplifier_GainSettings(), ecorePackage.getEDouble(), "gainSettings", null, 0, -1, Amplifier.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -1548,6 +1679,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		initEReference(getExperiment_Rig(), this.getRig(), null, "rig", null, 0, 1, Experiment.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getExperiment_Recordings(), this.getRecording(), null, "recordings", null, 0, -1, Experiment.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getExperiment_Channels(), this.getChannel(), null, "channels", null, 0, -1, Experiment.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getExperiment_Simulations(), this.getSimulationRun(), null, "simulations", null, 0, -1, Experiment.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(channelEClass, Channel.class, "Channel", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getChannel_Name(), ecorePackage.getEString(), "name", null, 0, 1, Channel.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -1575,6 +1707,16 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		initEAttribute(getSweepPlan_Modes(), this.getSweepMode(), "modes", null, 0, -1, SweepPlan.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getSweepPlan_Window(), this.getWindowKind(), "window", null, 0, 1, SweepPlan.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getSweepPlan_SegmentLength(), ecorePackage.getEInt(), "segmentLength", "4096", 0, 1, SweepPlan.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getSweepPlan_BandLowHz(), ecorePackage.getEDoubleObject(), "bandLowHz", null, 0, 1, SweepPlan.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getSweepPlan_BandHighHz(), ecorePackage.getEDoubleObject(), "bandHighHz", null, 0, 1, SweepPlan.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(simulationRunEClass, SimulationRun.class, "SimulationRun", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEReference(getSimulationRun_Channel(), this.getChannel(), null, "channel", null, 0, 1, SimulationRun.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getSimulationRun_Path(), ecorePackage.getEString(), "path", null, 0, 1, SimulationRun.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getSimulationRun_Mode(), this.getSweepMode(), "mode", null, 0, 1, SimulationRun.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getSimulationRun_SourceSha256(), ecorePackage.getEString(), "sourceSha256", null, 0, 1, SimulationRun.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getSimulationRun_ChainSignature(), ecorePackage.getEString(), "chainSignature", null, 0, 1, SimulationRun.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getSimulationRun_FinishedOn(), ecorePackage.getEDate(), "finishedOn", null, 0, 1, SimulationRun.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		// Initialize enums and add enum literals
 		initEEnum(filterFamilyEEnum, FilterFamily.class, "FilterFamily");
@@ -1600,6 +1742,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		initEEnum(sweepModeEEnum, SweepMode.class, "SweepMode");
 		addEEnumLiteral(sweepModeEEnum, SweepMode.BARE_SAMPLING);
 		addEEnumLiteral(sweepModeEEnum, SweepMode.FILTERED);
+		addEEnumLiteral(sweepModeEEnum, SweepMode.IDEAL_DECIMATOR);
 
 		initEEnum(windowKindEEnum, WindowKind.class, "WindowKind");
 		addEEnumLiteral(windowKindEEnum, WindowKind.HANN);

@@ -27,6 +27,7 @@ import org.foldbook.model.Sensor;
  *   <li>{@link org.foldbook.model.impl.SensorImpl#getUsableMinHz <em>Usable Min Hz</em>}</li>
  *   <li>{@link org.foldbook.model.impl.SensorImpl#getUsableMaxHz <em>Usable Max Hz</em>}</li>
  *   <li>{@link org.foldbook.model.impl.SensorImpl#getResonanceHz <em>Resonance Hz</em>}</li>
+ *   <li>{@link org.foldbook.model.impl.SensorImpl#getResonanceQ <em>Resonance Q</em>}</li>
  * </ul>
  *
  * @generated
@@ -171,6 +172,26 @@ public class SensorImpl extends DeviceImpl implements Sensor {
 	 * @ordered
 	 */
 	protected Double resonanceHz = RESONANCE_HZ_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getResonanceQ() <em>Resonance Q</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getResonanceQ()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final Double RESONANCE_Q_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getResonanceQ() <em>Resonance Q</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getResonanceQ()
+	 * @generated
+	 * @ordered
+	 */
+	protected Double resonanceQ = RESONANCE_Q_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -358,6 +379,29 @@ public class SensorImpl extends DeviceImpl implements Sensor {
 	 * @generated
 	 */
 	@Override
+	public Double getResonanceQ() {
+		return resonanceQ;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setResonanceQ(Double newResonanceQ) {
+		Double oldResonanceQ = resonanceQ;
+		resonanceQ = newResonanceQ;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, NotebookPackage.SENSOR__RESONANCE_Q, oldResonanceQ, resonanceQ));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case NotebookPackage.SENSOR__QUANTITY:
@@ -374,6 +418,8 @@ public class SensorImpl extends DeviceImpl implements Sensor {
 				return getUsableMaxHz();
 			case NotebookPackage.SENSOR__RESONANCE_HZ:
 				return getResonanceHz();
+			case NotebookPackage.SENSOR__RESONANCE_Q:
+				return getResonanceQ();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -406,6 +452,9 @@ public class SensorImpl extends DeviceImpl implements Sensor {
 				return;
 			case NotebookPackage.SENSOR__RESONANCE_HZ:
 				setResonanceHz((Double)newValue);
+				return;
+			case NotebookPackage.SENSOR__RESONANCE_Q:
+				setResonanceQ((Double)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -440,6 +489,9 @@ public class SensorImpl extends DeviceImpl implements Sensor {
 			case NotebookPackage.SENSOR__RESONANCE_HZ:
 				setResonanceHz(RESONANCE_HZ_EDEFAULT);
 				return;
+			case NotebookPackage.SENSOR__RESONANCE_Q:
+				setResonanceQ(RESONANCE_Q_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -466,6 +518,8 @@ public class SensorImpl extends DeviceImpl implements Sensor {
 				return USABLE_MAX_HZ_EDEFAULT == null ? usableMaxHz != null : !USABLE_MAX_HZ_EDEFAULT.equals(usableMaxHz);
 			case NotebookPackage.SENSOR__RESONANCE_HZ:
 				return RESONANCE_HZ_EDEFAULT == null ? resonanceHz != null : !RESONANCE_HZ_EDEFAULT.equals(resonanceHz);
+			case NotebookPackage.SENSOR__RESONANCE_Q:
+				return RESONANCE_Q_EDEFAULT == null ? resonanceQ != null : !RESONANCE_Q_EDEFAULT.equals(resonanceQ);
 		}
 		return super.eIsSet(featureID);
 	}
@@ -494,6 +548,8 @@ public class SensorImpl extends DeviceImpl implements Sensor {
 		result.append(usableMaxHz);
 		result.append(", resonanceHz: ");
 		result.append(resonanceHz);
+		result.append(", resonanceQ: ");
+		result.append(resonanceQ);
 		result.append(')');
 		return result.toString();
 	}

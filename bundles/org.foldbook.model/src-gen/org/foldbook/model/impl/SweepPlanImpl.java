@@ -37,6 +37,8 @@ import org.foldbook.model.WindowKind;
  *   <li>{@link org.foldbook.model.impl.SweepPlanImpl#getModes <em>Modes</em>}</li>
  *   <li>{@link org.foldbook.model.impl.SweepPlanImpl#getWindow <em>Window</em>}</li>
  *   <li>{@link org.foldbook.model.impl.SweepPlanImpl#getSegmentLength <em>Segment Length</em>}</li>
+ *   <li>{@link org.foldbook.model.impl.SweepPlanImpl#getBandLowHz <em>Band Low Hz</em>}</li>
+ *   <li>{@link org.foldbook.model.impl.SweepPlanImpl#getBandHighHz <em>Band High Hz</em>}</li>
  * </ul>
  *
  * @generated
@@ -171,6 +173,46 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 	 * @ordered
 	 */
 	protected int segmentLength = SEGMENT_LENGTH_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getBandLowHz() <em>Band Low Hz</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getBandLowHz()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final Double BAND_LOW_HZ_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getBandLowHz() <em>Band Low Hz</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getBandLowHz()
+	 * @generated
+	 * @ordered
+	 */
+	protected Double bandLowHz = BAND_LOW_HZ_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getBandHighHz() <em>Band High Hz</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getBandHighHz()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final Double BAND_HIGH_HZ_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getBandHighHz() <em>Band High Hz</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getBandHighHz()
+	 * @generated
+	 * @ordered
+	 */
+	protected Double bandHighHz = BAND_HIGH_HZ_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -348,6 +390,52 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 	 * @generated
 	 */
 	@Override
+	public Double getBandLowHz() {
+		return bandLowHz;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setBandLowHz(Double newBandLowHz) {
+		Double oldBandLowHz = bandLowHz;
+		bandLowHz = newBandLowHz;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, NotebookPackage.SWEEP_PLAN__BAND_LOW_HZ, oldBandLowHz, bandLowHz));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Double getBandHighHz() {
+		return bandHighHz;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setBandHighHz(Double newBandHighHz) {
+		Double oldBandHighHz = bandHighHz;
+		bandHighHz = newBandHighHz;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, NotebookPackage.SWEEP_PLAN__BAND_HIGH_HZ, oldBandHighHz, bandHighHz));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case NotebookPackage.SWEEP_PLAN__MIN_RATE_HZ:
@@ -364,6 +452,10 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 				return getWindow();
 			case NotebookPackage.SWEEP_PLAN__SEGMENT_LENGTH:
 				return getSegmentLength();
+			case NotebookPackage.SWEEP_PLAN__BAND_LOW_HZ:
+				return getBandLowHz();
+			case NotebookPackage.SWEEP_PLAN__BAND_HIGH_HZ:
+				return getBandHighHz();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -399,6 +491,12 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 			case NotebookPackage.SWEEP_PLAN__SEGMENT_LENGTH:
 				setSegmentLength((Integer)newValue);
 				return;
+			case NotebookPackage.SWEEP_PLAN__BAND_LOW_HZ:
+				setBandLowHz((Double)newValue);
+				return;
+			case NotebookPackage.SWEEP_PLAN__BAND_HIGH_HZ:
+				setBandHighHz((Double)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -432,6 +530,12 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 			case NotebookPackage.SWEEP_PLAN__SEGMENT_LENGTH:
 				setSegmentLength(SEGMENT_LENGTH_EDEFAULT);
 				return;
+			case NotebookPackage.SWEEP_PLAN__BAND_LOW_HZ:
+				setBandLowHz(BAND_LOW_HZ_EDEFAULT);
+				return;
+			case NotebookPackage.SWEEP_PLAN__BAND_HIGH_HZ:
+				setBandHighHz(BAND_HIGH_HZ_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -458,6 +562,10 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 				return window != WINDOW_EDEFAULT;
 			case NotebookPackage.SWEEP_PLAN__SEGMENT_LENGTH:
 				return segmentLength != SEGMENT_LENGTH_EDEFAULT;
+			case NotebookPackage.SWEEP_PLAN__BAND_LOW_HZ:
+				return BAND_LOW_HZ_EDEFAULT == null ? bandLowHz != null : !BAND_LOW_HZ_EDEFAULT.equals(bandLowHz);
+			case NotebookPackage.SWEEP_PLAN__BAND_HIGH_HZ:
+				return BAND_HIGH_HZ_EDEFAULT == null ? bandHighHz != null : !BAND_HIGH_HZ_EDEFAULT.equals(bandHighHz);
 		}
 		return super.eIsSet(featureID);
 	}
@@ -486,6 +594,10 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 		result.append(window);
 		result.append(", segmentLength: ");
 		result.append(segmentLength);
+		result.append(", bandLowHz: ");
+		result.append(bandLowHz);
+		result.append(", bandHighHz: ");
+		result.append(bandHighHz);
 		result.append(')');
 		return result.toString();
 	}

@@ -125,6 +125,10 @@ public class NotebookAdapterFactory extends AdapterFactoryImpl {
 				return createSweepPlanAdapter();
 			}
 			@Override
+			public Adapter caseSimulationRun(SimulationRun object) {
+				return createSimulationRunAdapter();
+			}
+			@Override
 			public Adapter defaultCase(EObject object) {
 				return createEObjectAdapter();
 			}
@@ -337,6 +341,20 @@ public class NotebookAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createSweepPlanAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.foldbook.model.SimulationRun <em>Simulation Run</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.foldbook.model.SimulationRun
+	 * @generated
+	 */
+	public Adapter createSimulationRunAdapter() {
 		return null;
 	}
 

@@ -156,6 +156,12 @@ public class NotebookSwitch<T> extends Switch<T> {
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
+			case NotebookPackage.SIMULATION_RUN: {
+				SimulationRun simulationRun = (SimulationRun)theEObject;
+				T result = caseSimulationRun(simulationRun);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
 			default: return defaultCase(theEObject);
 		}
 	}
@@ -367,6 +373,21 @@ public class NotebookSwitch<T> extends Switch<T> {
 	 * @generated
 	 */
 	public T caseSweepPlan(SweepPlan object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Simulation Run</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Simulation Run</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseSimulationRun(SimulationRun object) {
 		return null;
 	}
 

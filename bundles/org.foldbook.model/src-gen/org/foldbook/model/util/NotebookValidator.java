@@ -115,6 +115,8 @@ public class NotebookValidator extends EObjectValidator {
 				return validateRecording((Recording)value, diagnostics, context);
 			case NotebookPackage.SWEEP_PLAN:
 				return validateSweepPlan((SweepPlan)value, diagnostics, context);
+			case NotebookPackage.SIMULATION_RUN:
+				return validateSimulationRun((SimulationRun)value, diagnostics, context);
 			case NotebookPackage.FILTER_FAMILY:
 				return validateFilterFamily((FilterFamily)value, diagnostics, context);
 			case NotebookPackage.RECORDING_FORMAT:
@@ -500,6 +502,15 @@ public class NotebookValidator extends EObjectValidator {
 	 */
 	public boolean validateSweepPlan_ratesPositive(SweepPlan sweepPlan, DiagnosticChain diagnostics, Map<Object, Object> context) {
 		return org.foldbook.model.validation.RateRules.sweepPlanRates(sweepPlan, diagnostics, context);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public boolean validateSimulationRun(SimulationRun simulationRun, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return validate_EveryDefaultConstraint(simulationRun, diagnostics, context);
 	}
 
 	/**

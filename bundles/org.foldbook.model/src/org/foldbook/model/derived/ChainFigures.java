@@ -2,8 +2,6 @@ package org.foldbook.model.derived;
 
 import java.util.Optional;
 
-import java.util.ArrayList;
-import java.util.List;
 
 import java.util.function.DoubleFunction;
 
@@ -12,14 +10,11 @@ import org.foldbook.dsp.digitizer.IdealQuantiser;
 import org.foldbook.dsp.digitizer.RateSearchResult;
 import org.foldbook.dsp.filter.AnalogLowPass;
 import org.foldbook.dsp.filter.BesselNormalization;
-import org.foldbook.dsp.filter.Cascade;
-import org.foldbook.dsp.filter.DigitizerDigitalFilter;
-import org.foldbook.dsp.filter.ExposureBoxcar;
 import org.foldbook.dsp.filter.FrequencyResponse;
 import org.foldbook.dsp.fold.Folding;
 import org.foldbook.model.AntiAliasFilter;
-import org.foldbook.model.Amplifier;
 import org.foldbook.model.Camera;
+import org.foldbook.model.Amplifier;
 import org.foldbook.model.Device;
 import org.foldbook.model.Digitizer;
 import org.foldbook.model.FilterFamily;
@@ -189,42 +184,13 @@ public final class ChainFigures {
     }
 
     /**
-     * The chain's magnitude response before sampling, as far as the notebook describes it: the analog
-     * filter, a digitizer's built-in digital filter (when its edges and stop-band attenuation are
-     * given) and a camera's exposure (box-car). Elements that are not described are left out, so a
-     * chain with none of them is flat (|H| = 1).
+     * The chain's magnitude response before sampling at its own rate, as far as the notebook describes
+     * it: {@link ChainModel#protection} (the analog filter, a digitizer's built-in digital filter when
+     * its edges and stop-band attenuation are given, a camera's exposure). Elements that are not
+     * described are left out, so a chain with none of them is flat (|H| = 1).
      */
     public static FrequencyResponse chainResponse(SignalChain chain) {
-        List<FrequencyResponse> elements = new ArrayList<>();
-        Stage filter = filterStage(chain);
-        if (filter != null) {
-            filterResponse(filter).ifPresent(elements::add);
-        }
-        Stage sampler = samplingStage(chain);
-        double rate = samplingRateHz(chain);
-        if (sampler != null && rate > 0) {
-            if (sampler.getDevice() instanceof Digitizer digitizer && digitizer.isDigitalFilter()
-                    && digitizer.getPassbandFraction() != null && digitizer.getStopbandFraction() != null
-                    && digitizer.getStopbandAttenuationDb() != null) {
-                elements.add(DigitizerDigitalFilter.of(rate, digitizer.getPassbandFraction(),
-                        digitizer.getStopbandFraction(), digitizer.getStopbandAttenuationDb()));
-            }
-            if (sampler.getDevice() instanceof Camera camera) {
-                Double exposure = sampler.getExposureS() != null ? sampler.getExposureS() : camera.getExposureS();
-                if (exposure != null && exposure > 0) {
-                    elements.add(new ExposureBoxcar(exposure));
-                }
-            }
-        }
-        if (elements.isEmpty()) {
-            return frequencyHz -> {
-                if (!Double.isFinite(frequencyHz)) {
-                    throw new IllegalArgumentException("frequencyHz must be finite, was " + frequencyHz);
-                }
-                return 1.0;
-            };
-        }
-        return elements.size() == 1 ? elements.get(0) : Cascade.of(elements);
+        return ChainModel.of(chain).protection(samplingRateHz(chain));
     }
 
     /**
@@ -301,18 +267,8 @@ public final class ChainFigures {
         if (!(maxRate >= 2 * bandHz)) {
             return Optional.empty();
         }
-        Optional<FrequencyResponse> analog = Optional.ofNullable(filterStage(chain)).flatMap(ChainFigures::filterResponse);
-        boolean digital = digitizer.isDigitalFilter() && digitizer.getPassbandFraction() != null
-                && digitizer.getStopbandFraction() != null && digitizer.getStopbandAttenuationDb() != null;
-        DoubleFunction<FrequencyResponse> atRate = fs -> {
-            List<FrequencyResponse> parts = new ArrayList<>();
-            analog.ifPresent(parts::add);
-            if (digital) {
-                parts.add(DigitizerDigitalFilter.of(fs, digitizer.getPassbandFraction(),
-                        digitizer.getStopbandFraction(), digitizer.getStopbandAttenuationDb()));
-            }
-            return parts.isEmpty() ? chainResponse(chain) : parts.size() == 1 ? parts.get(0) : Cascade.of(parts);
-        };
+        ChainModel model = ChainModel.of(chain);
+        DoubleFunction<FrequencyResponse> atRate = model::protection;
         return Optional.of(AliasAnalysis.lowestRate(atRate, sensorMax, need.get().requiredDb(), bandHz,
                 2 * bandHz, maxRate, 1e-6));
     }
