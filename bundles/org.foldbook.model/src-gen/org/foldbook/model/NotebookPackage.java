@@ -1436,13 +1436,22 @@ public interface NotebookPackage extends EPackage {
 	int SWEEP_PLAN__SEGMENT_LENGTH = 6;
 
 	/**
+	 * The feature id for the '<em><b>Through Chain</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SWEEP_PLAN__THROUGH_CHAIN = 7;
+
+	/**
 	 * The feature id for the '<em><b>Band Low Hz</b></em>' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int SWEEP_PLAN__BAND_LOW_HZ = 7;
+	int SWEEP_PLAN__BAND_LOW_HZ = 8;
 
 	/**
 	 * The feature id for the '<em><b>Band High Hz</b></em>' attribute.
@@ -1451,7 +1460,7 @@ public interface NotebookPackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int SWEEP_PLAN__BAND_HIGH_HZ = 8;
+	int SWEEP_PLAN__BAND_HIGH_HZ = 9;
 
 	/**
 	 * The number of structural features of the '<em>Sweep Plan</em>' class.
@@ -1460,7 +1469,7 @@ public interface NotebookPackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int SWEEP_PLAN_FEATURE_COUNT = 9;
+	int SWEEP_PLAN_FEATURE_COUNT = 10;
 
 	/**
 	 * The number of operations of the '<em>Sweep Plan</em>' class.
@@ -2688,6 +2697,17 @@ public interface NotebookPackage extends EPackage {
 	EAttribute getSweepPlan_SegmentLength();
 
 	/**
+	 * Returns the meta object for the reference '{@link org.foldbook.model.SweepPlan#getThroughChain <em>Through Chain</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Through Chain</em>'.
+	 * @see org.foldbook.model.SweepPlan#getThroughChain()
+	 * @see #getSweepPlan()
+	 * @generated
+	 */
+	EReference getSweepPlan_ThroughChain();
+
+	/**
 	 * Returns the meta object for the attribute '{@link org.foldbook.model.SweepPlan#getBandLowHz <em>Band Low Hz</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -3685,6 +3705,14 @@ public interface NotebookPackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute SWEEP_PLAN__SEGMENT_LENGTH = eINSTANCE.getSweepPlan_SegmentLength();
+
+		/**
+		 * The meta object literal for the '<em><b>Through Chain</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference SWEEP_PLAN__THROUGH_CHAIN = eINSTANCE.getSweepPlan_ThroughChain();
 
 		/**
 		 * The meta object literal for the '<em><b>Band Low Hz</b></em>' attribute feature.

@@ -23,6 +23,7 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link org.foldbook.model.SweepPlan#getModes <em>Modes</em>}</li>
  *   <li>{@link org.foldbook.model.SweepPlan#getWindow <em>Window</em>}</li>
  *   <li>{@link org.foldbook.model.SweepPlan#getSegmentLength <em>Segment Length</em>}</li>
+ *   <li>{@link org.foldbook.model.SweepPlan#getThroughChain <em>Through Chain</em>}</li>
  *   <li>{@link org.foldbook.model.SweepPlan#getBandLowHz <em>Band Low Hz</em>}</li>
  *   <li>{@link org.foldbook.model.SweepPlan#getBandHighHz <em>Band High Hz</em>}</li>
  * </ul>
@@ -184,6 +185,31 @@ public interface SweepPlan extends EObject {
 	 * @generated
 	 */
 	void setSegmentLength(int value);
+
+	/**
+	 * Returns the value of the '<em><b>Through Chain</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The chain whose modelled elements the FILTERED mode applies (e.g. the everyday chain, for a survey recording made through a wide-band one); unset: the channel's own chain. Elements the recording already passed are not applied twice.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Through Chain</em>' reference.
+	 * @see #setThroughChain(SignalChain)
+	 * @see org.foldbook.model.NotebookPackage#getSweepPlan_ThroughChain()
+	 * @model
+	 * @generated
+	 */
+	SignalChain getThroughChain();
+
+	/**
+	 * Sets the value of the '{@link org.foldbook.model.SweepPlan#getThroughChain <em>Through Chain</em>}' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Through Chain</em>' reference.
+	 * @see #getThroughChain()
+	 * @generated
+	 */
+	void setThroughChain(SignalChain value);
 
 	/**
 	 * Returns the value of the '<em><b>Band Low Hz</b></em>' attribute.

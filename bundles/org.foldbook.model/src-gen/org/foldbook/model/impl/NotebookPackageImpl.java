@@ -1261,8 +1261,18 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 	 * @generated
 	 */
 	@Override
+	public EReference getSweepPlan_ThroughChain() {
+		return (EReference)sweepPlanEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EAttribute getSweepPlan_BandLowHz() {
-		return (EAttribute)sweepPlanEClass.getEStructuralFeatures().get(7);
+		return (EAttribute)sweepPlanEClass.getEStructuralFeatures().get(8);
 	}
 
 	/**
@@ -1272,7 +1282,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 	 */
 	@Override
 	public EAttribute getSweepPlan_BandHighHz() {
-		return (EAttribute)sweepPlanEClass.getEStructuralFeatures().get(8);
+		return (EAttribute)sweepPlanEClass.getEStructuralFeatures().get(9);
 	}
 
 	/**
@@ -1537,6 +1547,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		createEAttribute(sweepPlanEClass, SWEEP_PLAN__MODES);
 		createEAttribute(sweepPlanEClass, SWEEP_PLAN__WINDOW);
 		createEAttribute(sweepPlanEClass, SWEEP_PLAN__SEGMENT_LENGTH);
+		createEReference(sweepPlanEClass, SWEEP_PLAN__THROUGH_CHAIN);
 		createEAttribute(sweepPlanEClass, SWEEP_PLAN__BAND_LOW_HZ);
 		createEAttribute(sweepPlanEClass, SWEEP_PLAN__BAND_HIGH_HZ);
 
@@ -1707,6 +1718,7 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		initEAttribute(getSweepPlan_Modes(), this.getSweepMode(), "modes", null, 0, -1, SweepPlan.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getSweepPlan_Window(), this.getWindowKind(), "window", null, 0, 1, SweepPlan.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getSweepPlan_SegmentLength(), ecorePackage.getEInt(), "segmentLength", "4096", 0, 1, SweepPlan.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getSweepPlan_ThroughChain(), this.getSignalChain(), null, "throughChain", null, 0, 1, SweepPlan.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getSweepPlan_BandLowHz(), ecorePackage.getEDoubleObject(), "bandLowHz", null, 0, 1, SweepPlan.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getSweepPlan_BandHighHz(), ecorePackage.getEDoubleObject(), "bandHighHz", null, 0, 1, SweepPlan.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 

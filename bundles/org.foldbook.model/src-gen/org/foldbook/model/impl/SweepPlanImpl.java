@@ -11,6 +11,7 @@ import org.eclipse.emf.common.util.EList;
 
 import org.eclipse.emf.ecore.EClass;
 
+import org.eclipse.emf.ecore.InternalEObject;
 import org.eclipse.emf.ecore.impl.ENotificationImpl;
 import org.eclipse.emf.ecore.impl.MinimalEObjectImpl;
 
@@ -18,6 +19,7 @@ import org.eclipse.emf.ecore.util.EDataTypeUniqueEList;
 
 import org.foldbook.model.NotebookPackage;
 import org.foldbook.model.RateSpacing;
+import org.foldbook.model.SignalChain;
 import org.foldbook.model.SweepMode;
 import org.foldbook.model.SweepPlan;
 import org.foldbook.model.WindowKind;
@@ -37,6 +39,7 @@ import org.foldbook.model.WindowKind;
  *   <li>{@link org.foldbook.model.impl.SweepPlanImpl#getModes <em>Modes</em>}</li>
  *   <li>{@link org.foldbook.model.impl.SweepPlanImpl#getWindow <em>Window</em>}</li>
  *   <li>{@link org.foldbook.model.impl.SweepPlanImpl#getSegmentLength <em>Segment Length</em>}</li>
+ *   <li>{@link org.foldbook.model.impl.SweepPlanImpl#getThroughChain <em>Through Chain</em>}</li>
  *   <li>{@link org.foldbook.model.impl.SweepPlanImpl#getBandLowHz <em>Band Low Hz</em>}</li>
  *   <li>{@link org.foldbook.model.impl.SweepPlanImpl#getBandHighHz <em>Band High Hz</em>}</li>
  * </ul>
@@ -173,6 +176,16 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 	 * @ordered
 	 */
 	protected int segmentLength = SEGMENT_LENGTH_EDEFAULT;
+
+	/**
+	 * The cached value of the '{@link #getThroughChain() <em>Through Chain</em>}' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getThroughChain()
+	 * @generated
+	 * @ordered
+	 */
+	protected SignalChain throughChain;
 
 	/**
 	 * The default value of the '{@link #getBandLowHz() <em>Band Low Hz</em>}' attribute.
@@ -390,6 +403,46 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 	 * @generated
 	 */
 	@Override
+	public SignalChain getThroughChain() {
+		if (throughChain != null && throughChain.eIsProxy()) {
+			InternalEObject oldThroughChain = (InternalEObject)throughChain;
+			throughChain = (SignalChain)eResolveProxy(oldThroughChain);
+			if (throughChain != oldThroughChain) {
+				if (eNotificationRequired())
+					eNotify(new ENotificationImpl(this, Notification.RESOLVE, NotebookPackage.SWEEP_PLAN__THROUGH_CHAIN, oldThroughChain, throughChain));
+			}
+		}
+		return throughChain;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public SignalChain basicGetThroughChain() {
+		return throughChain;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setThroughChain(SignalChain newThroughChain) {
+		SignalChain oldThroughChain = throughChain;
+		throughChain = newThroughChain;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, NotebookPackage.SWEEP_PLAN__THROUGH_CHAIN, oldThroughChain, throughChain));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Double getBandLowHz() {
 		return bandLowHz;
 	}
@@ -452,6 +505,9 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 				return getWindow();
 			case NotebookPackage.SWEEP_PLAN__SEGMENT_LENGTH:
 				return getSegmentLength();
+			case NotebookPackage.SWEEP_PLAN__THROUGH_CHAIN:
+				if (resolve) return getThroughChain();
+				return basicGetThroughChain();
 			case NotebookPackage.SWEEP_PLAN__BAND_LOW_HZ:
 				return getBandLowHz();
 			case NotebookPackage.SWEEP_PLAN__BAND_HIGH_HZ:
@@ -490,6 +546,9 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 				return;
 			case NotebookPackage.SWEEP_PLAN__SEGMENT_LENGTH:
 				setSegmentLength((Integer)newValue);
+				return;
+			case NotebookPackage.SWEEP_PLAN__THROUGH_CHAIN:
+				setThroughChain((SignalChain)newValue);
 				return;
 			case NotebookPackage.SWEEP_PLAN__BAND_LOW_HZ:
 				setBandLowHz((Double)newValue);
@@ -530,6 +589,9 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 			case NotebookPackage.SWEEP_PLAN__SEGMENT_LENGTH:
 				setSegmentLength(SEGMENT_LENGTH_EDEFAULT);
 				return;
+			case NotebookPackage.SWEEP_PLAN__THROUGH_CHAIN:
+				setThroughChain((SignalChain)null);
+				return;
 			case NotebookPackage.SWEEP_PLAN__BAND_LOW_HZ:
 				setBandLowHz(BAND_LOW_HZ_EDEFAULT);
 				return;
@@ -562,6 +624,8 @@ public class SweepPlanImpl extends MinimalEObjectImpl.Container implements Sweep
 				return window != WINDOW_EDEFAULT;
 			case NotebookPackage.SWEEP_PLAN__SEGMENT_LENGTH:
 				return segmentLength != SEGMENT_LENGTH_EDEFAULT;
+			case NotebookPackage.SWEEP_PLAN__THROUGH_CHAIN:
+				return throughChain != null;
 			case NotebookPackage.SWEEP_PLAN__BAND_LOW_HZ:
 				return BAND_LOW_HZ_EDEFAULT == null ? bandLowHz != null : !BAND_LOW_HZ_EDEFAULT.equals(bandLowHz);
 			case NotebookPackage.SWEEP_PLAN__BAND_HIGH_HZ:

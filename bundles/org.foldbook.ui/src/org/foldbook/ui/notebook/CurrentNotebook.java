@@ -12,7 +12,9 @@ public final class CurrentNotebook {
 
     private NotebookDocument document;
     private String problem;
+    private Object selection;
     private final List<Consumer<CurrentNotebook>> listeners = new ArrayList<>();
+    private final List<Consumer<Object>> selectionListeners = new ArrayList<>();
 
     /** The open notebook, or null while none is open. */
     public NotebookDocument document() {
@@ -24,11 +26,39 @@ public final class CurrentNotebook {
         return problem;
     }
 
-    /** Makes {@code next} the open notebook, disposing the previous one. */
+    /**
+     * The notebook object the user selected last in the Notebook part (a channel, a chain, a rig …), or
+     * null. The other parts follow it: the recording view and the simulation show the selected channel.
+     */
+    public Object selection() {
+        return selection;
+    }
+
+    /** Sets the selected notebook object (null: none) and tells the selection listeners when it changed. */
+    public void select(Object next) {
+        if (next == selection) {
+            return;
+        }
+        selection = next;
+        for (Consumer<Object> l : List.copyOf(selectionListeners)) {
+            l.accept(next);
+        }
+    }
+
+    public void addSelectionListener(Consumer<Object> listener) {
+        selectionListeners.add(listener);
+    }
+
+    public void removeSelectionListener(Consumer<Object> listener) {
+        selectionListeners.remove(listener);
+    }
+
+    /** Makes {@code next} the open notebook, disposing the previous one (the selection is cleared). */
     public void open(NotebookDocument next) {
         NotebookDocument previous = document;
         document = next;
         problem = null;
+        select(null);
         fire();
         if (previous != null && previous != next) {
             previous.dispose();

@@ -156,7 +156,13 @@ public class NotebookPart {
                 return NotebookTree.summary(element);
             }
         });
-        tree.addSelectionChangedListener(e -> showDetails(((IStructuredSelection) e.getSelection()).getFirstElement()));
+        tree.addSelectionChangedListener(e -> {
+            Object first = ((IStructuredSelection) e.getSelection()).getFirstElement();
+            showDetails(first);
+            if (current != null) {
+                current.select(first);
+            }
+        });
     }
 
     private void createDetails(Composite parent) {
