@@ -1,0 +1,169 @@
+package org.foldbook.channel;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.CancellationException;
+
+import org.foldbook.io.ReadOptions;
+import org.foldbook.io.RecordingDescriptor;
+import org.foldbook.io.RecordingFormatException;
+import org.foldbook.io.RecordingInfo;
+import org.foldbook.io.RecordingReader;
+import org.foldbook.io.Recordings;
+import org.foldbook.io.csv.DelimitedTextSettings;
+import org.foldbook.model.Channel;
+import org.foldbook.model.Recording;
+import org.foldbook.model.RecordingFormat;
+import org.foldbook.model.persistence.RecordingFiles;
+
+/**
+ * Reads a notebook channel's samples: the recording's path resolved against the notebook's folder,
+ * the file opened read-only through {@link Recordings#open} (WAV/RF64, CSV/TSV, raw with its layout
+ * sidecar, HDF5), its SHA-256 streamed while reading and compared with the logged one, its rate and
+ * channel count compared with the notebook's. The workbench and the command line both read channels
+ * here, so they see the same samples and the same problems.
+ */
+public final class ChannelReader {
+    private static final int BLOCK = 1 << 16;
+    /** Rates that differ by less than this fraction are the same rate (text time stamps round). */
+    private static final double RATE_TOLERANCE = 1e-6;
+
+    private ChannelReader() {
+    }
+
+    /** What to accept while reading. */
+    public record ReadRequest(boolean acceptChangedChecksum) {
+        /** A changed checksum is an error. */
+        public static final ReadRequest STRICT = new ReadRequest(false);
+    }
+
+    /** The recording file of {@code channel}, resolved against its notebook's folder. */
+    public static Path fileOf(Channel channel) throws ChannelDataException {
+        Recording recording = channel.getRecording();
+        if (recording == null) {
+            throw new ChannelDataException(null, "channel '" + channel.getName() + "' names no recording");
+        }
+        try {
+            return RecordingFiles.resolve(recording);
+        } catch (IllegalArgumentException | IllegalStateException e) {
+            throw new ChannelDataException(null, "recording " + recording.getId() + " of channel '"
+                    + channel.getName() + "': " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Reads the channel whole. A changed file is an error unless the request accepts it (then the data
+     * says so); a missing, unreadable or corrupt file, or one that disagrees with the notebook about rate
+     * or channel count, is an error naming the file.
+     *
+     * @throws CancellationException when {@code progress} asked to stop
+     */
+    public static ChannelData read(Channel channel, ReadRequest request, ReadProgress progress)
+            throws ChannelDataException {
+        Path file = fileOf(channel);
+        Recording recording = channel.getRecording();
+        if (!Files.isRegularFile(file)) {
+            throw new ChannelDataException(file, Files.exists(file) ? "not a regular file"
+                    : "missing (the notebook expects recording " + recording.getId() + " here)");
+        }
+        try (RecordingReader reader = open(file, recording)) {
+            RecordingInfo info = reader.info();
+            checkAgainstNotebook(file, info, channel, recording);
+            double[] samples = readChannel(reader, info, channel.getChannelIndex(), file, progress);
+            String sha = reader.sha256Hex().toLowerCase(Locale.ROOT);
+            String logged = recording.getSha256();
+            boolean changed = logged != null && !logged.isBlank() && !logged.equalsIgnoreCase(sha);
+            if (changed && !request.acceptChangedChecksum()) {
+                throw new ChannelDataException(file, "changed since it was logged: SHA-256 now " + sha
+                        + ", logged " + logged.toLowerCase(Locale.ROOT)
+                        + " (a different or edited file; accept it explicitly to go on)");
+            }
+            String unit = info.channels().get(channel.getChannelIndex()).unit();
+            return new ChannelData(file, samples, info.sampleRate(), sha, changed, unit);
+        } catch (ChannelDataException | CancellationException e) {
+            throw e;
+        } catch (RecordingFormatException e) {
+            throw new ChannelDataException(file, "cannot be read: " + e.getMessage(), e);
+        } catch (IOException e) {
+            throw new ChannelDataException(file, "cannot be read: " + e.getMessage(), e);
+        } catch (IllegalArgumentException e) {
+            throw new ChannelDataException(file, e.getMessage(), e);
+        }
+    }
+
+    /** Opens by content; a text recording without a time column takes the notebook's declared rate. */
+    private static RecordingReader open(Path file, Recording recording) throws IOException {
+        RecordingFormat format = recording.getFormat();
+        boolean text = format == RecordingFormat.CSV || format == RecordingFormat.TSV;
+        if (!text) {
+            return Recordings.open(file, null, ReadOptions.DEFAULT);
+        }
+        RecordingDescriptor detect = DelimitedTextSettings.DETECT;
+        try {
+            return Recordings.open(file, detect, ReadOptions.DEFAULT);
+        } catch (RecordingFormatException e) {
+            if (recording.getDeclaredRateHz() > 0 && e.getMessage().contains("no time column")) {
+                return Recordings.open(file, DelimitedTextSettings.DETECT.withSampleRate(recording.getDeclaredRateHz()),
+                        ReadOptions.DEFAULT);
+            }
+            throw e;
+        }
+    }
+
+    private static void checkAgainstNotebook(Path file, RecordingInfo info, Channel channel, Recording recording)
+            throws ChannelDataException {
+        int index = channel.getChannelIndex();
+        if (index < 0 || index >= info.channelCount()) {
+            throw new ChannelDataException(file, "channel '" + channel.getName() + "' is index " + index
+                    + ", but the file holds " + info.channelCount() + " channel(s)");
+        }
+        if (recording.getChannelCount() > 0 && recording.getChannelCount() != info.channelCount()) {
+            throw new ChannelDataException(file, "the notebook says " + recording.getChannelCount()
+                    + " channel(s), the file holds " + info.channelCount());
+        }
+        double declared = recording.getDeclaredRateHz();
+        if (declared > 0 && Math.abs(info.sampleRate() - declared) > RATE_TOLERANCE * declared) {
+            throw new ChannelDataException(file, String.format(Locale.ROOT,
+                    "the file is at %.9g S/s, the notebook declares %.9g S/s", info.sampleRate(), declared));
+        }
+        if (info.frameCount() < 1) {
+            throw new ChannelDataException(file, "holds no samples");
+        }
+        if (info.frameCount() > Integer.MAX_VALUE - 8) {
+            throw new ChannelDataException(file, info.frameCount() + " frames: more than one array holds");
+        }
+    }
+
+    private static double[] readChannel(RecordingReader r, RecordingInfo info, int channel, Path file,
+            ReadProgress progress) throws IOException {
+        int n = (int) info.frameCount();
+        int channels = info.channelCount();
+        double[] x = new double[n];
+        double[][] bufs = channels == 1 ? new double[][] {x} : new double[channels][BLOCK];
+        int pos = 0;
+        while (pos < n) {
+            if (progress.cancelled()) {
+                throw new CancellationException("reading " + file + " cancelled");
+            }
+            int want = Math.min(BLOCK, n - pos);
+            int got = channels == 1 ? r.read(bufs, pos, want) : r.read(bufs, 0, want);
+            if (got < 0) {
+                throw new ChannelDataException(file, "ended after " + pos + " of " + n + " frames");
+            }
+            if (channels > 1) {
+                System.arraycopy(bufs[channel], 0, x, pos, got);
+            }
+            pos += got;
+            progress.framesRead(pos, n);
+        }
+        for (int i = 0; i < n; i++) {
+            if (!Double.isFinite(x[i])) {
+                throw new ChannelDataException(file, "sample " + i + " of channel " + channel + " is " + x[i]
+                        + " (not a finite number)");
+            }
+        }
+        return x;
+    }
+}
