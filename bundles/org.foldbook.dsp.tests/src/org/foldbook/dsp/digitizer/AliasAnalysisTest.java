@@ -132,10 +132,10 @@ class AliasAnalysisTest {
     }
 
     @Test
-    @DisplayName("ChainFigures: 16 bit, Butterworth 8 at 10 kHz, 51.2 kS/s (ratio 2.56, common practice), sensor to 100 kHz")
+    @DisplayName("ProtectionFigures: 16 bit, Butterworth 8 at 10 kHz, 51.2 kS/s (ratio 2.56, common practice), sensor to 100 kHz")
     void chainFigures() {
         AnalogFilter bw = AnalogLowPass.butterworth(8, 10_000);
-        ChainFigures c = ChainFigures.of(100_000, bw, 16, 51_200);
+        ProtectionFigures c = ProtectionFigures.of(100_000, bw, 16, 51_200);
         double req = 6.02 * 16 + 1.76; // Kester MT-001
         assertEquals(req, c.requiredAttenuationDb(), 0.015);
         assertEquals(25_600, c.nyquistHz(), 0);
@@ -147,10 +147,10 @@ class AliasAnalysisTest {
     }
 
     @Test
-    @DisplayName("ChainFigures with a stated dynamic range: 110 dB and −30 dBFS content need 80 dB; Butterworth 4 at 10 kHz, 25.6 kS/s")
+    @DisplayName("ProtectionFigures with a stated dynamic range: 110 dB and −30 dBFS content need 80 dB; Butterworth 4 at 10 kHz, 25.6 kS/s")
     void chainFiguresOfDynamicRange() {
         AnalogFilter bw = AnalogLowPass.butterworth(4, 10_000);
-        ChainFigures c = ChainFigures.ofDynamicRange(32_000, bw, 24, 25_600, 110, -30);
+        ProtectionFigures c = ProtectionFigures.ofDynamicRange(32_000, bw, 24, 25_600, 110, -30);
         assertEquals(80, c.requiredAttenuationDb(), 0); // alias of −30 dBFS content must lie 110 dB under full scale
         // Butterworth |H|² = 1/(1 + (f/fc)^2n) (any filter handbook): at fs/2 = 12.8 kHz, 10·log10(1 + 1.28^8)
         // = 10·log10(8.20576) = 9.141 dB, worked by hand
@@ -161,16 +161,16 @@ class AliasAnalysisTest {
         assertEquals(25_600, c.limitingSourceHz(), 0);
         // the dynamic-range entry with the ideal quantiser's SNR is the ideal-quantiser entry (Kester MT-001)
         double snr16 = new IdealQuantiser(16, 1.0).snrDb();
-        ChainFigures viaRange = ChainFigures.ofDynamicRange(100_000, bw, 16, 51_200, snr16, -20);
-        ChainFigures viaQuantiser = ChainFigures.of(100_000, bw, new IdealQuantiser(16, 1.0), 51_200, -20,
+        ProtectionFigures viaRange = ProtectionFigures.ofDynamicRange(100_000, bw, 16, 51_200, snr16, -20);
+        ProtectionFigures viaQuantiser = ProtectionFigures.of(100_000, bw, new IdealQuantiser(16, 1.0), 51_200, -20,
                 AliasCriterion.BELOW_NOISE_FLOOR);
         assertEquals(viaQuantiser, viaRange);
         assertEquals(6.02 * 16 + 1.76 - 20, viaRange.requiredAttenuationDb(), 0.015);
         // content already below the floor needs nothing
-        assertEquals(0, ChainFigures.requiredAttenuationDb(100, -120), 0);
-        assertMessage(() -> ChainFigures.requiredAttenuationDb(0, -30), "dynamicRangeDb", "0.0");
-        assertMessage(() -> ChainFigures.requiredAttenuationDb(110, Double.NaN), "toneLevelDbfs", "NaN");
-        assertMessage(() -> ChainFigures.ofDynamicRange(32_000, bw, 33, 25_600, 110, -30), "bits", "33");
+        assertEquals(0, ProtectionFigures.requiredAttenuationDb(100, -120), 0);
+        assertMessage(() -> ProtectionFigures.requiredAttenuationDb(0, -30), "dynamicRangeDb", "0.0");
+        assertMessage(() -> ProtectionFigures.requiredAttenuationDb(110, Double.NaN), "toneLevelDbfs", "NaN");
+        assertMessage(() -> ProtectionFigures.ofDynamicRange(32_000, bw, 33, 25_600, 110, -30), "bits", "33");
     }
 
     @Test
@@ -184,6 +184,6 @@ class AliasAnalysisTest {
         assertMessage(() -> AliasAnalysis.of(bw, 1000, 80).protectionMargin(1000, 600), "bandHz", "600.0");
         assertMessage(() -> AliasAnalysis.of(bw, 1000, 80).lowestRate(100, 10, 1000, 0), "relativeTolerance", "0.0");
         assertMessage(() -> AliasAnalysis.of(bw, 1000, 80).lowestRate(100, 10, 150, 1e-6), "maxRateHz", "150.0");
-        assertMessage(() -> ChainFigures.of(1000, bw, 0, 2000), "bits", "0");
+        assertMessage(() -> ProtectionFigures.of(1000, bw, 0, 2000), "bits", "0");
     }
 }

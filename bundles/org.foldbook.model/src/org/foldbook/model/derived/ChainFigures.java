@@ -5,6 +5,7 @@ import java.util.Optional;
 
 import java.util.function.DoubleFunction;
 
+import org.foldbook.dsp.digitizer.ProtectionFigures;
 import org.foldbook.dsp.digitizer.AliasAnalysis;
 import org.foldbook.dsp.digitizer.IdealQuantiser;
 import org.foldbook.dsp.digitizer.RateSearchResult;
@@ -199,7 +200,7 @@ public final class ChainFigures {
      * out-of-band content must fall below the digitizer's noise floor. Empty for camera chains, or
      * when the rate, the resolution or the sensor's upper frequency is not known.
      */
-    public static Optional<org.foldbook.dsp.digitizer.ChainFigures> figures(SignalChain chain) {
+    public static Optional<ProtectionFigures> figures(SignalChain chain) {
         Optional<Need> need = need(chain);
         double rate = samplingRateHz(chain);
         double sensorMax = frontEndUpperHz(chain);
@@ -208,7 +209,7 @@ public final class ChainFigures {
         }
         Digitizer digitizer = (Digitizer) samplingStage(chain).getDevice();
         Need n = need.get();
-        return Optional.of(org.foldbook.dsp.digitizer.ChainFigures.ofDynamicRange(sensorMax, chainResponse(chain),
+        return Optional.of(ProtectionFigures.ofDynamicRange(sensorMax, chainResponse(chain),
                 digitizer.getResolutionBits(), rate, n.dynamicRangeDb(), n.outOfBandLevelDbfs()));
     }
 
@@ -231,7 +232,7 @@ public final class ChainFigures {
         boolean levelStated = chain.getOutOfBandLevelDbfs() != null;
         double level = levelStated ? chain.getOutOfBandLevelDbfs() : 0.0;
         return Optional.of(new Need(digitizer.getResolutionBits(), range, rangeStated, level, levelStated,
-                org.foldbook.dsp.digitizer.ChainFigures.requiredAttenuationDb(range, level)));
+                ProtectionFigures.requiredAttenuationDb(range, level)));
     }
 
     /**

@@ -14,6 +14,7 @@ import java.util.Optional;
 
 import org.eclipse.emf.common.util.Diagnostic;
 import org.eclipse.emf.common.util.DiagnosticChain;
+import org.foldbook.dsp.digitizer.ProtectionFigures;
 import org.foldbook.dsp.digitizer.RateSearchResult;
 import org.foldbook.model.Camera;
 import org.foldbook.model.Digitizer;
@@ -93,14 +94,14 @@ public final class ChainRules {
         if (ChainFigures.filterStage(chain) == null && !ChainFigures.hasBuiltInDigitalFilter(chain)) {
             return true;
         }
-        Optional<org.foldbook.dsp.digitizer.ChainFigures> figures = ChainFigures.figures(chain);
+        Optional<ProtectionFigures> figures = ChainFigures.figures(chain);
         Optional<ChainFigures.Need> need = ChainFigures.need(chain);
         // only once the chain states what it must be protected against: under the worst case (a
         // full-scale tone) almost no real filter passes, and a warning on every chain would say nothing
         if (figures.isEmpty() || need.isEmpty() || !need.get().levelStated() || !(figures.get().marginDb() < 0)) {
             return true;
         }
-        org.foldbook.dsp.digitizer.ChainFigures f = figures.get();
+        ProtectionFigures f = figures.get();
         ChainFigures.Need n = need.get();
         String band = f.aliasFreeBandHz() > 0 ? "0 to " + hz(f.aliasFreeBandHz()) : "none";
         if (!Double.isNaN(f.limitingSourceHz())) {

@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.StringJoiner;
 
+import org.foldbook.dsp.digitizer.ProtectionFigures;
 import org.foldbook.dsp.filter.FrequencyResponse;
 import org.foldbook.model.Amplifier;
 import org.foldbook.model.AntiAliasFilter;
@@ -100,9 +101,9 @@ public final class ChainSummary {
             cameraRows(chain, sampler, rate, rows);
             return rows;
         }
-        Optional<org.foldbook.dsp.digitizer.ChainFigures> figures = ChainFigures.figures(chain);
+        Optional<ProtectionFigures> figures = ChainFigures.figures(chain);
         if (figures.isPresent()) {
-            org.foldbook.dsp.digitizer.ChainFigures f = figures.get();
+            ProtectionFigures f = figures.get();
             String whole = db(f.attenuationAtNyquistDb()) + " attenuation";
             if (!rows.get(rows.size() - 1).value().equals(whole)) { // differs when a digital filter adds to it
                 rows.add(new Row("Whole chain at Nyquist", whole));

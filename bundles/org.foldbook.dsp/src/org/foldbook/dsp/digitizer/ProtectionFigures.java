@@ -18,7 +18,7 @@ import org.foldbook.dsp.filter.FrequencyResponse;
  *                               anything that folds into it, minus the requirement (+∞ when the
  *                               sensor passes nothing above fs/2)
  */
-public record ChainFigures(double sensorMaxHz, double sampleRateHz, int bits, double nyquistHz,
+public record ProtectionFigures(double sensorMaxHz, double sampleRateHz, int bits, double nyquistHz,
         double requiredAttenuationDb, double aliasFreeBandHz, double limitingSourceHz, double attenuationAtNyquistDb,
         double marginDb) {
 
@@ -26,12 +26,12 @@ public record ChainFigures(double sensorMaxHz, double sampleRateHz, int bits, do
      * Figures assuming the worst usual case: an out-of-band tone at full scale (0 dBFS) whose alias
      * must fall below the ideal quantisation noise, i.e. a required attenuation of 6.02·N + 1.76 dB.
      */
-    public static ChainFigures of(double sensorMaxHz, FrequencyResponse chain, int bits, double sampleRateHz) {
+    public static ProtectionFigures of(double sensorMaxHz, FrequencyResponse chain, int bits, double sampleRateHz) {
         return of(sensorMaxHz, chain, new IdealQuantiser(bits, 1.0), sampleRateHz, 0.0, AliasCriterion.BELOW_NOISE_FLOOR);
     }
 
     /** Figures for a stated out-of-band tone level and criterion. */
-    public static ChainFigures of(double sensorMaxHz, FrequencyResponse chain, IdealQuantiser quantiser,
+    public static ProtectionFigures of(double sensorMaxHz, FrequencyResponse chain, IdealQuantiser quantiser,
             double sampleRateHz, double toneLevelDbfs, AliasCriterion criterion) {
         if (quantiser == null) {
             throw new IllegalArgumentException("quantiser must not be null");
@@ -50,7 +50,7 @@ public record ChainFigures(double sensorMaxHz, double sampleRateHz, int bits, do
      * @param dynamicRangeDb full scale over the noise floor, dB, &gt; 0
      * @param toneLevelDbfs  the strongest content above Nyquist, dBFS (0 = a full-scale tone)
      */
-    public static ChainFigures ofDynamicRange(double sensorMaxHz, FrequencyResponse chain, int bits,
+    public static ProtectionFigures ofDynamicRange(double sensorMaxHz, FrequencyResponse chain, int bits,
             double sampleRateHz, double dynamicRangeDb, double toneLevelDbfs) {
         new IdealQuantiser(bits, 1.0); // checks bits
         return from(sensorMaxHz, chain, bits, sampleRateHz, requiredAttenuationDb(dynamicRangeDb, toneLevelDbfs));
@@ -67,12 +67,12 @@ public record ChainFigures(double sensorMaxHz, double sampleRateHz, int bits, do
         return Math.max(0, dynamicRangeDb + toneLevelDbfs);
     }
 
-    private static ChainFigures from(double sensorMaxHz, FrequencyResponse chain, int bits, double sampleRateHz,
+    private static ProtectionFigures from(double sensorMaxHz, FrequencyResponse chain, int bits, double sampleRateHz,
             double required) {
         AliasAnalysis a = AliasAnalysis.of(chain, sensorMaxHz, required);
         AliasFreeBand band = a.aliasFreeBand(sampleRateHz);
         ProtectionMargin m = a.protectionMargin(sampleRateHz, 0.5 * sampleRateHz);
-        return new ChainFigures(sensorMaxHz, sampleRateHz, bits, 0.5 * sampleRateHz, required,
+        return new ProtectionFigures(sensorMaxHz, sampleRateHz, bits, 0.5 * sampleRateHz, required,
                 band.bandHz(), band.limitingSourceHz(), m.attenuationAtNyquistDb(), m.marginDb());
     }
 }
