@@ -31,6 +31,7 @@ import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swt.widgets.Text;
 import org.eclipse.swtchart.Range;
+import org.foldbook.dsp.digitizer.ProtectionFigures;
 import org.foldbook.dsp.filter.FrequencyResponse;
 import org.foldbook.model.Channel;
 import org.foldbook.model.Digitizer;
@@ -411,7 +412,7 @@ public class NotebookPart {
         }
         plot.addMarker("Nyquist", new double[] { nyquist, nyquist },
                 new double[] { CHART_FLOOR_DB, 5 });
-        Optional<org.foldbook.dsp.digitizer.ChainFigures> f = ChainFigures.figures(chain);
+        Optional<ProtectionFigures> f = ChainFigures.figures(chain);
         f.ifPresent(fig -> plot.addMarker(String.format(Locale.ROOT, "need −%.0f dB", fig.requiredAttenuationDb()),
                 new double[] { 0, top }, new double[] { -fig.requiredAttenuationDb(), -fig.requiredAttenuationDb() }));
         plot.setRanges(new Range(0, top), new Range(CHART_FLOOR_DB, 5));
