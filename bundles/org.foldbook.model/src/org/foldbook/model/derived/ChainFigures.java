@@ -51,9 +51,14 @@ public final class ChainFigures {
      */
     public static double samplingRateHz(SignalChain chain) {
         Stage stage = samplingStage(chain);
-        if (stage == null) {
-            return Double.NaN;
-        }
+        return stage == null ? Double.NaN : stageRateHz(stage);
+    }
+
+    /**
+     * Rate in effect at a digitizer or camera stage: the stage's own setting, else the digitizer's maximum
+     * rate or the camera's first frame rate; NaN for other stages or when none is known.
+     */
+    public static double stageRateHz(Stage stage) {
         if (stage.getRateHz() != null) {
             return stage.getRateHz();
         }
@@ -61,8 +66,10 @@ public final class ChainFigures {
         if (device instanceof Digitizer digitizer) {
             return digitizer.getMaxRateHz();
         }
-        Camera camera = (Camera) device;
-        return camera.getFrameRatesHz().isEmpty() ? Double.NaN : camera.getFrameRatesHz().get(0);
+        if (device instanceof Camera camera) {
+            return camera.getFrameRatesHz().isEmpty() ? Double.NaN : camera.getFrameRatesHz().get(0);
+        }
+        return Double.NaN;
     }
 
     /** Half the sampling rate (Nyquist frequency), NaN when the rate is unknown. */

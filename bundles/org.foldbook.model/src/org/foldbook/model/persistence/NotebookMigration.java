@@ -1,5 +1,6 @@
 package org.foldbook.model.persistence;
 
+import org.foldbook.model.derived.Names;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.Iterator;
@@ -12,7 +13,6 @@ import org.eclipse.emf.ecore.xmi.XMLResource;
 import org.eclipse.emf.ecore.xml.type.AnyType;
 import org.foldbook.model.Recording;
 import org.foldbook.model.Sensor;
-import org.foldbook.model.validation.Labels;
 
 /**
  * Reads notebooks of the previous format version, 0.9 (namespace {@value #PREVIOUS_NS_URI}; its
@@ -50,7 +50,7 @@ public final class NotebookMigration {
                         it.remove();
                     }
                 } catch (IllegalArgumentException e) {
-                    problems.add(Labels.of(object) + ": " + e.getMessage());
+                    problems.add(Names.label(object) + ": " + e.getMessage());
                 }
             }
             AnyType rest = entry.getValue();

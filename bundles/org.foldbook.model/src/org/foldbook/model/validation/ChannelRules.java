@@ -1,5 +1,6 @@
 package org.foldbook.model.validation;
 
+import org.foldbook.model.derived.Names;
 import static org.foldbook.model.validation.Findings.INDEX_OUTSIDE_RECORDING;
 import static org.foldbook.model.validation.Findings.UNIT_MISMATCH;
 import static org.foldbook.model.validation.Findings.report;
@@ -32,7 +33,7 @@ public final class ChannelRules {
             return true;
         }
         return report(diagnostics, Diagnostic.ERROR, INDEX_OUTSIDE_RECORDING, channel,
-                "channel index " + index + " is outside " + Labels.of(recording) + ", which holds " + count
+                "channel index " + index + " is outside " + Names.label(recording) + ", which holds " + count
                         + " channel(s), indices 0 to " + (count - 1),
                 "Pick an index from 0 to " + (count - 1) + ", or correct the recording's channel count");
     }
@@ -52,7 +53,7 @@ public final class ChannelRules {
         }
         return report(diagnostics, Diagnostic.ERROR, UNIT_MISMATCH, channel,
                 "unit '" + channel.getUnit() + "' differs from '" + sensorUnit + "' measured by "
-                        + Labels.of(stage.getDevice()),
+                        + Names.label(stage.getDevice()),
                 "Set the channel's unit to '" + sensorUnit + "', or link the channel to the chain of the sensor it"
                         + " really came from");
     }

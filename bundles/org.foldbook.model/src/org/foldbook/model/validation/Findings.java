@@ -1,5 +1,6 @@
 package org.foldbook.model.validation;
 
+import org.foldbook.model.derived.Names;
 import java.util.Locale;
 
 import org.eclipse.emf.common.util.BasicDiagnostic;
@@ -35,7 +36,7 @@ public final class Findings {
     static boolean report(DiagnosticChain diagnostics, int severity, int code, EObject subject, String problem,
             String remedy) {
         if (diagnostics != null) {
-            String message = Labels.of(subject) + ": " + problem + ". " + remedy + ".";
+            String message = Names.label(subject) + ": " + problem + ". " + remedy + ".";
             diagnostics.add(new BasicDiagnostic(severity, NotebookValidator.DIAGNOSTIC_SOURCE, code, message,
                     new Object[] { subject }));
         }

@@ -1,5 +1,6 @@
 package org.foldbook.model.validation;
 
+import org.foldbook.model.derived.Names;
 import static org.foldbook.model.validation.Findings.RIG_OUTSIDE_VALIDITY;
 import static org.foldbook.model.validation.Findings.RIG_VALIDITY_REVERSED;
 import static org.foldbook.model.validation.Findings.report;
@@ -52,7 +53,7 @@ public final class RigDateRules {
         String range = (rig.getValidFrom() == null ? "…" : day(rig.getValidFrom()).toString()) + " to "
                 + (rig.getValidUntil() == null ? "now" : day(rig.getValidUntil()).toString());
         return report(diagnostics, Diagnostic.ERROR, RIG_OUTSIDE_VALIDITY, experiment,
-                "dated " + when + ", but " + Labels.of(rig) + " is valid only from " + range,
+                "dated " + when + ", but " + Names.label(rig) + " is valid only from " + range,
                 "Link the experiment to the rig configuration in use on " + when
                         + ", or correct the experiment's date or the rig's validity");
     }

@@ -1,5 +1,13 @@
 package org.foldbook.ui.notebook;
 
+import static org.foldbook.model.derived.Quantities.plain;
+import static org.foldbook.model.derived.Quantities.ms;
+import static org.foldbook.model.derived.Quantities.signedDb;
+import static org.foldbook.model.derived.Quantities.db;
+import static org.foldbook.model.derived.Quantities.number;
+import static org.foldbook.model.derived.Quantities.rate;
+import static org.foldbook.model.derived.Quantities.hz;
+import org.foldbook.model.derived.Names;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -38,39 +46,9 @@ public final class ChainSummary {
     public static String path(SignalChain chain) {
         StringJoiner line = new StringJoiner("  →  ");
         for (Stage stage : chain.getStages()) {
-            line.add(stageText(stage));
+            line.add(Names.stageText(stage));
         }
         return line.length() == 0 ? "(no stages)" : line.toString();
-    }
-
-    /** A stage's device and its settings, short. */
-    public static String stageText(Stage stage) {
-        Device device = stage.getDevice();
-        if (device == null) {
-            return "(no device)";
-        }
-        String name = device.getId() != null ? device.getId() : String.valueOf(device.getModelName());
-        if (device instanceof Amplifier) {
-            return name + (stage.getGain() != null ? " ×" + number(stage.getGain()) : "");
-        }
-        if (device instanceof AntiAliasFilter filter) {
-            if (filter.getFamily() == FilterFamily.NONE) {
-                return name + " (no filtering)";
-            }
-            double cutoff = stage.getCutoffHz() != null ? stage.getCutoffHz() : filter.getCutoffHz();
-            return name + " " + familyText(filter) + " @ " + hz(cutoff);
-        }
-        if (device instanceof Digitizer digitizer) {
-            Double rate = stage.getRateHz() != null ? stage.getRateHz() : digitizer.getMaxRateHz();
-            return name + " " + digitizer.getResolutionBits() + "-bit @ " + rate(rate)
-                    + (digitizer.isDigitalFilter() ? " (built-in filter)" : "");
-        }
-        if (device instanceof Camera camera) {
-            Double rate = stage.getRateHz() != null ? stage.getRateHz()
-                    : camera.getFrameRatesHz().isEmpty() ? null : camera.getFrameRatesHz().get(0);
-            return name + " @ " + (rate == null ? "?" : number(rate) + " frames/s");
-        }
-        return name;
     }
 
     /** The figures of the chain, in reading order. */
@@ -155,63 +133,5 @@ public final class ChainSummary {
                 100 * exposure / period)));
         FrequencyResponse response = ChainFigures.chainResponse(chain);
         rows.add(new Row("Exposure smear at Nyquist", db(response.attenuationDb(rate / 2)) + " attenuation"));
-    }
-
-    static String familyText(AntiAliasFilter filter) {
-        String family = switch (filter.getFamily()) {
-            case RC -> "RC";
-            case BUTTERWORTH -> "Butterworth";
-            case BESSEL -> "Bessel";
-            case CHEBYSHEV_I -> "Chebyshev I";
-            case ELLIPTIC -> "elliptic";
-            case NONE -> "none";
-            case UNKNOWN -> "unknown type";
-        };
-        return filter.getOrder() > 0 && filter.getFamily() != FilterFamily.RC ? family + " " + filter.getOrder() : family;
-    }
-
-    /** "12.8 kHz", "906.5 Hz". */
-    public static String hz(double value) {
-        if (Double.isNaN(value)) {
-            return "?";
-        }
-        return Math.abs(value) >= 1000 ? number(value / 1000) + " kHz" : number(value) + " Hz";
-    }
-
-    /** "25.6 kS/s". */
-    public static String rate(double value) {
-        return Math.abs(value) >= 1000 ? number(value / 1000) + " kS/s" : number(value) + " S/s";
-    }
-
-    static String db(double value) {
-        return Double.isInfinite(value) ? "∞ dB" : String.format(Locale.ROOT, "%.1f dB", value);
-    }
-
-    static String signedDb(double value) {
-        return String.format(Locale.ROOT, "%+.1f dB", value);
-    }
-
-    static String ms(double seconds) {
-        return number(seconds * 1000) + " ms";
-    }
-
-    /** A value for an input field, in full: 25600, 10000, 0.0008 (no exponent, no trailing zeros). */
-    static String plain(double value) {
-        if (!Double.isFinite(value)) {
-            return "";
-        }
-        return new java.math.BigDecimal(Double.toString(value)).stripTrailingZeros().toPlainString();
-    }
-
-    /** Up to four significant digits, no trailing zeros: 12.8, 906.5, 0.8, 25.6. */
-    static String number(double value) {
-        String s = String.format(Locale.ROOT, "%.4g", value);
-        if (s.contains("e")) {
-            return s;
-        }
-        if (s.contains(".")) {
-            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
-        }
-        return s;
     }
 }

@@ -1,5 +1,7 @@
 package org.foldbook.ui.notebook;
 
+import org.foldbook.model.derived.Quantities;
+import org.foldbook.model.derived.Names;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -331,13 +333,13 @@ public class NotebookPart {
         String heading = "Select a chain or a channel to see its figures; other entries show their facts.";
         if (element instanceof SignalChain c) {
             chain = c;
-            heading = "Chain: " + NotebookTree.shortName(c);
+            heading = "Chain: " + Names.shortName(c);
         } else if (element instanceof Channel channel && channel.getChain() != null) {
             chain = channel.getChain();
-            heading = "Channel: " + channel.getName() + "  (chain " + NotebookTree.shortName(chain) + ")";
+            heading = "Channel: " + channel.getName() + "  (chain " + Names.shortName(chain) + ")";
         } else if (element instanceof Stage stage && stage.eContainer() instanceof SignalChain c) {
             chain = c;
-            heading = "Stage of chain " + NotebookTree.shortName(c);
+            heading = "Stage of chain " + Names.shortName(c);
         }
         shownChain = chain;
         title.setText(heading);
@@ -350,7 +352,7 @@ public class NotebookPart {
             settings.setVisible(false);
             plot.setRanges(null, null);
             if (element instanceof org.eclipse.emf.ecore.EObject object) {
-                title.setText(NotebookTree.kindOf(object) + ": " + NotebookTree.name(object));
+                title.setText(Names.kindTitle(object) + ": " + NotebookTree.name(object));
                 fill(ObjectSummary.rows(object));
             }
             title.getParent().layout(true, true);
@@ -361,11 +363,11 @@ public class NotebookPart {
         Stage sampler = ChainFigures.samplingStage(chain);
         Stage filter = ChainFigures.filterStage(chain);
         settings.setVisible(sampler != null);
-        rateField.setText(sampler == null ? "" : ChainSummary.plain(ChainFigures.samplingRateHz(chain)));
+        rateField.setText(sampler == null ? "" : Quantities.plain(ChainFigures.samplingRateHz(chain)));
         cutoffField.setEnabled(filter != null);
-        cutoffField.setText(filter == null ? "" : ChainSummary.plain(ChainFigures.effectiveCutoffHz(filter)));
+        cutoffField.setText(filter == null ? "" : Quantities.plain(ChainFigures.effectiveCutoffHz(filter)));
         levelField.setEnabled(sampler != null && sampler.getDevice() instanceof Digitizer);
-        levelField.setText(chain.getOutOfBandLevelDbfs() == null ? "" : ChainSummary.plain(chain.getOutOfBandLevelDbfs()));
+        levelField.setText(chain.getOutOfBandLevelDbfs() == null ? "" : Quantities.plain(chain.getOutOfBandLevelDbfs()));
         drawResponse(chain);
         title.getParent().layout(true, true);
     }
@@ -441,8 +443,8 @@ public class NotebookPart {
             return;
         }
         if (rate && stage.getDevice() instanceof Digitizer digitizer && value > digitizer.getMaxRateHz()) {
-            settingsProblem("Sampling rate " + ChainSummary.rate(value) + " is above the digitizer's maximum "
-                    + ChainSummary.rate(digitizer.getMaxRateHz()) + ".");
+            settingsProblem("Sampling rate " + Quantities.rate(value) + " is above the digitizer's maximum "
+                    + Quantities.rate(digitizer.getMaxRateHz()) + ".");
             return;
         }
         Command command = SetCommand.create(document.domain(), stage,

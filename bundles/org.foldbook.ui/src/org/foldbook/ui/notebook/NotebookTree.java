@@ -1,5 +1,7 @@
 package org.foldbook.ui.notebook;
 
+import org.foldbook.model.derived.Quantities;
+import org.foldbook.model.derived.Names;
 import java.util.List;
 
 import org.eclipse.emf.ecore.EObject;
@@ -103,22 +105,22 @@ final class NotebookTree implements ITreeContentProvider {
         if (element instanceof Notebook notebook) {
             return notebook.getTitle() == null ? "(untitled notebook)" : notebook.getTitle();
         }
-        return element instanceof EObject o ? shortName(o) : String.valueOf(element);
+        return element instanceof EObject o ? Names.shortName(o) : String.valueOf(element);
     }
 
     /** Text of the tree's second column: the one fact worth seeing without selecting the row. */
     static String summary(Object element) {
         if (element instanceof Device device) {
-            return kind(device) + deviceSpec(device);
+            return Names.kind(device) + deviceSpec(device);
         }
         if (element instanceof SignalChain chain) {
             double rate = ChainFigures.samplingRateHz(chain);
             return Double.isNaN(rate) ? "no sampling stage"
-                    : "Nyquist " + ChainSummary.hz(rate / 2) + ", " + chain.getStages().size()
+                    : "Nyquist " + Quantities.hz(rate / 2) + ", " + chain.getStages().size()
                             + (chain.getStages().size() == 1 ? " stage" : " stages");
         }
         if (element instanceof Stage stage) {
-            return stage.getDevice() == null ? "" : kind(stage.getDevice());
+            return stage.getDevice() == null ? "" : Names.kind(stage.getDevice());
         }
         if (element instanceof Channel channel) {
             String unit = channel.getUnit() == null ? "" : "[" + channel.getUnit() + "] ";
@@ -126,7 +128,7 @@ final class NotebookTree implements ITreeContentProvider {
                     : channel.getRecording().getId() + " ch " + channel.getChannelIndex());
         }
         if (element instanceof Recording recording) {
-            return recording.getChannelCount() + " ch @ " + ChainSummary.rate(recording.getDeclaredRateHz())
+            return recording.getChannelCount() + " ch @ " + Quantities.rate(recording.getDeclaredRateHz())
                     + (recording.getFormat() != null ? ", " + recording.getFormat().getLiteral() : "");
         }
         if (element instanceof Experiment experiment) {
@@ -138,68 +140,23 @@ final class NotebookTree implements ITreeContentProvider {
         return "";
     }
 
-    /** A short name of a model object (for the tree and the findings list). */
-    static String shortName(EObject object) {
-        if (object instanceof Device device) {
-            return device.getId() != null ? device.getId() : String.valueOf(device.getModelName());
-        }
-        if (object instanceof Rig rig) {
-            return rig.getName() != null ? rig.getName() : String.valueOf(rig.getId());
-        }
-        if (object instanceof SignalChain chain) {
-            return chain.getName() != null ? chain.getName() : String.valueOf(chain.getId());
-        }
-        if (object instanceof Stage stage) {
-            return ChainSummary.stageText(stage);
-        }
-        if (object instanceof Experiment experiment) {
-            return String.valueOf(experiment.getName());
-        }
-        if (object instanceof Channel channel) {
-            return String.valueOf(channel.getName());
-        }
-        if (object instanceof Recording recording) {
-            return recording.getPath() != null ? recording.getPath() : String.valueOf(recording.getId());
-        }
-        if (object instanceof Notebook notebook) {
-            return String.valueOf(notebook.getTitle());
-        }
-        return object.eClass().getName();
-    }
-
     /** The figure that tells devices of one kind apart, e.g. ", 24-bit, 51.2 kS/s max". */
     private static String deviceSpec(Device device) {
         if (device instanceof org.foldbook.model.Sensor sensor) {
             return (sensor.getUnit() != null ? ", " + sensor.getUnit() : "")
-                    + (sensor.getUsableMaxHz() != null ? ", to " + ChainSummary.hz(sensor.getUsableMaxHz()) : "");
+                    + (sensor.getUsableMaxHz() != null ? ", to " + Quantities.hz(sensor.getUsableMaxHz()) : "");
         }
         if (device instanceof org.foldbook.model.AntiAliasFilter filter) {
             return filter.getFamily() == org.foldbook.model.FilterFamily.NONE ? ", bypass"
-                    : ", " + ChainSummary.familyText(filter) + " @ " + ChainSummary.hz(filter.getCutoffHz());
+                    : ", " + Names.familyText(filter) + " @ " + Quantities.hz(filter.getCutoffHz());
         }
         if (device instanceof org.foldbook.model.Digitizer digitizer) {
-            return ", " + digitizer.getResolutionBits() + "-bit, " + ChainSummary.rate(digitizer.getMaxRateHz()) + " max"
+            return ", " + digitizer.getResolutionBits() + "-bit, " + Quantities.rate(digitizer.getMaxRateHz()) + " max"
                     + (digitizer.isDigitalFilter() ? ", delta-sigma" : "");
         }
         if (device instanceof org.foldbook.model.Camera camera && !camera.getFrameRatesHz().isEmpty()) {
-            return ", to " + ChainSummary.number(java.util.Collections.max(camera.getFrameRatesHz())) + " frames/s";
+            return ", to " + Quantities.number(java.util.Collections.max(camera.getFrameRatesHz())) + " frames/s";
         }
         return "";
-    }
-
-    /** "Device", "Rig", "Experiment", "Recording", "Notebook" for the details' heading. */
-    static String kindOf(EObject object) {
-        if (object instanceof Device device) {
-            String kind = kind(device);
-            return Character.toUpperCase(kind.charAt(0)) + kind.substring(1);
-        }
-        return object.eClass().getName();
-    }
-
-    static String kind(Device device) {
-        return switch (device.eClass().getName()) {
-            case "AntiAliasFilter" -> "anti-alias filter";
-            default -> device.eClass().getName().toLowerCase(java.util.Locale.ROOT);
-        };
     }
 }

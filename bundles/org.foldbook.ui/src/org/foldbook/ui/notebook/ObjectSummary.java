@@ -1,5 +1,7 @@
 package org.foldbook.ui.notebook;
 
+import org.foldbook.model.derived.Quantities;
+import org.foldbook.model.derived.Names;
 import java.util.ArrayList;
 import java.util.Date;
 import java.util.List;
@@ -30,7 +32,7 @@ final class ObjectSummary {
     static List<Row> rows(EObject object) {
         List<Row> rows = new ArrayList<>();
         if (object instanceof Device device) {
-            add(rows, "Kind", NotebookTree.kind(device));
+            add(rows, "Kind", Names.kind(device));
             add(rows, "Model", device.getModelName());
             add(rows, "Serial number", device.getSerialNumber());
             add(rows, "Calibrated", day(device.getCalibrationDate()));
@@ -43,14 +45,14 @@ final class ObjectSummary {
             add(rows, "Notes", rig.getNotes());
         } else if (object instanceof Experiment experiment) {
             add(rows, "Date", day(experiment.getDate()));
-            add(rows, "Rig", experiment.getRig() == null ? null : NotebookTree.shortName(experiment.getRig()));
+            add(rows, "Rig", experiment.getRig() == null ? null : Names.shortName(experiment.getRig()));
             add(rows, "Operator", experiment.getOperator());
             add(rows, "Purpose", experiment.getPurpose());
             add(rows, "Notes", experiment.getNotes());
         } else if (object instanceof Recording recording) {
             add(rows, "File", recording.getPath());
             add(rows, "Format", recording.getFormat() == null ? null : recording.getFormat().getLiteral());
-            add(rows, "Declared rate", ChainSummary.rate(recording.getDeclaredRateHz()));
+            add(rows, "Declared rate", Quantities.rate(recording.getDeclaredRateHz()));
             add(rows, "Channels", Integer.toString(recording.getChannelCount()));
             add(rows, "Size", recording.getSizeBytes() + " bytes");
             add(rows, "SHA-256 logged", recording.getSha256());
@@ -67,32 +69,32 @@ final class ObjectSummary {
         if (device instanceof Sensor s) {
             add(rows, "Measures", s.getQuantity() == null ? null : s.getQuantity() + (s.getUnit() == null ? "" : " in " + s.getUnit()));
             add(rows, "Sensitivity", s.getSensitivity() == null ? null
-                    : ChainSummary.number(s.getSensitivity()) + " " + (s.getSensitivityUnit() == null ? "" : s.getSensitivityUnit()));
+                    : Quantities.number(s.getSensitivity()) + " " + (s.getSensitivityUnit() == null ? "" : s.getSensitivityUnit()));
             if (s.getUsableMinHz() != null || s.getUsableMaxHz() != null) {
-                add(rows, "Usable band", (s.getUsableMinHz() == null ? "?" : ChainSummary.hz(s.getUsableMinHz())) + " – "
-                        + (s.getUsableMaxHz() == null ? "?" : ChainSummary.hz(s.getUsableMaxHz())));
+                add(rows, "Usable band", (s.getUsableMinHz() == null ? "?" : Quantities.hz(s.getUsableMinHz())) + " – "
+                        + (s.getUsableMaxHz() == null ? "?" : Quantities.hz(s.getUsableMaxHz())));
             }
-            add(rows, "Resonance", s.getResonanceHz() == null ? null : ChainSummary.hz(s.getResonanceHz()));
+            add(rows, "Resonance", s.getResonanceHz() == null ? null : Quantities.hz(s.getResonanceHz()));
         } else if (device instanceof Amplifier a) {
             add(rows, "Gains", a.getGainSettings().isEmpty() ? null
-                    : String.join(", ", a.getGainSettings().stream().map(g -> "×" + ChainSummary.number(g)).toList()));
-            add(rows, "Bandwidth up to", a.getBandwidthHighHz() == null ? null : ChainSummary.hz(a.getBandwidthHighHz()));
+                    : String.join(", ", a.getGainSettings().stream().map(g -> "×" + Quantities.number(g)).toList()));
+            add(rows, "Bandwidth up to", a.getBandwidthHighHz() == null ? null : Quantities.hz(a.getBandwidthHighHz()));
         } else if (device instanceof AntiAliasFilter f) {
-            add(rows, "Response", ChainSummary.familyText(f));
-            add(rows, "Cutoff", f.getCutoffHz() > 0 ? ChainSummary.hz(f.getCutoffHz()) : null);
+            add(rows, "Response", Names.familyText(f));
+            add(rows, "Cutoff", f.getCutoffHz() > 0 ? Quantities.hz(f.getCutoffHz()) : null);
         } else if (device instanceof Digitizer d) {
             add(rows, "Resolution", d.getResolutionBits() + " bits");
-            add(rows, "Dynamic range", d.getDynamicRangeDb() != null ? ChainSummary.number(d.getDynamicRangeDb()) + " dB (specification)"
+            add(rows, "Dynamic range", d.getDynamicRangeDb() != null ? Quantities.number(d.getDynamicRangeDb()) + " dB (specification)"
                     : d.getResolutionBits() > 0 && d.getResolutionBits() <= org.foldbook.dsp.digitizer.IdealQuantiser.MAX_BITS
-                            ? ChainSummary.number(new org.foldbook.dsp.digitizer.IdealQuantiser(d.getResolutionBits(), 1.0).snrDb())
+                            ? Quantities.number(new org.foldbook.dsp.digitizer.IdealQuantiser(d.getResolutionBits(), 1.0).snrDb())
                                     + " dB (not given: ideal quantiser, 6.02·N + 1.76 dB)"
                             : null);
-            add(rows, "Highest rate", ChainSummary.rate(d.getMaxRateHz()));
+            add(rows, "Highest rate", Quantities.rate(d.getMaxRateHz()));
             add(rows, "Built-in digital filter", d.isDigitalFilter() ? "yes (delta-sigma)" : "no");
         } else if (device instanceof Camera c) {
             add(rows, "Frame rates", c.getFrameRatesHz().isEmpty() ? null
-                    : String.join(", ", c.getFrameRatesHz().stream().map(ChainSummary::number).toList()) + " frames/s");
-            add(rows, "Exposure", c.getExposureS() == null ? null : ChainSummary.ms(c.getExposureS()));
+                    : String.join(", ", c.getFrameRatesHz().stream().map(Quantities::number).toList()) + " frames/s");
+            add(rows, "Exposure", c.getExposureS() == null ? null : Quantities.ms(c.getExposureS()));
         }
     }
 

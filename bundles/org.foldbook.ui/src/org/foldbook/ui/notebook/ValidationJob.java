@@ -1,5 +1,6 @@
 package org.foldbook.ui.notebook;
 
+import org.foldbook.model.derived.Names;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -23,7 +24,6 @@ import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.foldbook.model.Notebook;
 import org.foldbook.model.Recording;
 import org.foldbook.model.persistence.NotebookStore;
-import org.foldbook.model.validation.Labels;
 
 /**
  * Validates a notebook in the background: the rules stream every recording's file through SHA-256,
@@ -77,7 +77,7 @@ public final class ValidationJob extends Job {
                 if (sub.isCanceled()) {
                     throw new OperationCanceledException();
                 }
-                String what = eObject instanceof Recording ? "checksum of " + Labels.of(eObject) : Labels.of(eObject);
+                String what = eObject instanceof Recording ? "checksum of " + Names.label(eObject) : Names.label(eObject);
                 sub.subTask(what);
                 progress.update(done[0], all, what);
                 boolean valid = super.validate(eClass, eObject, diagnostics, context);
@@ -106,13 +106,13 @@ public final class ValidationJob extends Job {
                 EObject copy = child.getData().isEmpty() || !(child.getData().get(0) instanceof EObject o) ? null : o;
                 EObject subject = copy == null || copy.eResource() == null ? null
                         : original.getEObject(copy.eResource().getURIFragment(copy));
-                String label = copy == null ? "notebook" : Labels.of(copy);
+                String label = copy == null ? "notebook" : Names.label(copy);
                 String message = child.getMessage();
                 if (message.startsWith(label + ": ")) {
                     message = message.substring(label.length() + 2);
                 }
                 into.add(new Finding(child.getSeverity(), child.getCode(), subject,
-                        copy == null ? "notebook" : NotebookTree.shortName(copy), message));
+                        copy == null ? "notebook" : Names.shortName(copy), message));
             }
             collect(child, into);
         }
