@@ -74,7 +74,7 @@ class FoldExplorerPartTest {
         Text[] fields = findAll(shell, Text.class);
         fields[1].setText("-3");
         Label status = find(shell, Label.class, l -> (l.getStyle() & SWT.WRAP) != 0);
-        assertTrue(status.getText().contains("sample rate"), status.getText());
+        assertTrue(status.getText().startsWith("Sample rate must be a positive number"), status.getText());
         fields[1].setText("fast");
         assertTrue(status.getText().contains("not a number"), status.getText());
     }

@@ -33,6 +33,7 @@ import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swt.widgets.Text;
 import org.eclipse.swtchart.Range;
+import org.foldbook.dsp.NumberText;
 import org.foldbook.dsp.digitizer.ProtectionFigures;
 import org.foldbook.dsp.filter.FrequencyResponse;
 import org.foldbook.model.Channel;
@@ -431,15 +432,9 @@ public class NotebookPart {
         }
         double value;
         try {
-            value = Double.parseDouble(field.getText().trim());
-        } catch (NumberFormatException e) {
-            settingsProblem((rate ? "Sampling rate" : "Filter cutoff") + " is not a number: '"
-                    + field.getText().trim() + "'.");
-            return;
-        }
-        if (!(value > 0) || Double.isInfinite(value)) {
-            settingsProblem((rate ? "Sampling rate" : "Filter cutoff") + " must be a positive number, was "
-                    + field.getText().trim() + ".");
+            value = NumberText.positive(rate ? "sampling rate" : "filter cutoff", field.getText());
+        } catch (IllegalArgumentException e) {
+            settingsProblem(e.getMessage());
             return;
         }
         if (rate && stage.getDevice() instanceof Digitizer digitizer && value > digitizer.getMaxRateHz()) {
@@ -466,18 +461,12 @@ public class NotebookPart {
             }
             value = SetCommand.UNSET_VALUE;
         } else {
-            double level;
             try {
-                level = Double.parseDouble(text);
-            } catch (NumberFormatException e) {
-                settingsProblem("Out-of-band level is not a number: '" + levelField.getText().trim() + "'.");
+                value = NumberText.finite("out-of-band level", text);
+            } catch (IllegalArgumentException e) {
+                settingsProblem(e.getMessage());
                 return;
             }
-            if (!Double.isFinite(level)) {
-                settingsProblem("Out-of-band level must be a finite number of dBFS, was " + text + ".");
-                return;
-            }
-            value = level;
         }
         document.execute(SetCommand.create(document.domain(), chain,
                 NotebookPackage.Literals.SIGNAL_CHAIN__OUT_OF_BAND_LEVEL_DBFS, value));

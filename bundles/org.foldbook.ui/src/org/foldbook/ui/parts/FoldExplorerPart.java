@@ -14,6 +14,7 @@ import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swt.widgets.Text;
 import org.eclipse.swtchart.Range;
+import org.foldbook.dsp.NumberText;
 import org.foldbook.ui.chart.PlotView;
 
 import jakarta.annotation.PostConstruct;
@@ -107,29 +108,11 @@ public class FoldExplorerPart {
     }
 
     static double[] parseTones(String text) {
-        List<Double> values = new ArrayList<>();
-        for (String s : text.split("[,;\\s]+")) {
-            if (!s.isBlank()) {
-                values.add(parsePositive("tone '" + s + "'", s));
-            }
-        }
-        if (values.isEmpty()) {
-            throw new IllegalArgumentException("Enter at least one tone frequency in Hz.");
-        }
-        return values.stream().mapToDouble(Double::doubleValue).toArray();
+        return NumberText.positiveList("tone frequency in Hz", text);
     }
 
     static double parsePositive(String what, String text) {
-        double v;
-        try {
-            v = Double.parseDouble(text.trim());
-        } catch (NumberFormatException e) {
-            throw new IllegalArgumentException("The " + what + " is not a number: '" + text.trim() + "'.");
-        }
-        if (!(v > 0) || Double.isInfinite(v)) {
-            throw new IllegalArgumentException("The " + what + " must be a positive number of Hz, was " + text.trim() + ".");
-        }
-        return v;
+        return NumberText.positive(what, text);
     }
 
     private static String fmt(double v) {
