@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.Date;
 import java.util.List;
 
+import org.foldbook.io.Sha256;
 import org.foldbook.model.Amplifier;
 import org.foldbook.model.AntiAliasFilter;
 import org.foldbook.model.Camera;
@@ -27,7 +28,6 @@ import org.foldbook.model.SignalChain;
 import org.foldbook.model.Stage;
 import org.foldbook.model.derived.ChainFigures;
 import org.foldbook.model.demo.SyntheticTones.Tone;
-import org.foldbook.model.persistence.FileChecksum;
 import org.foldbook.model.persistence.NotebookStore;
 import org.foldbook.model.persistence.RecordingFiles;
 
@@ -93,7 +93,7 @@ public final class GearboxDemo {
                 long size = PcmWavWriter.write(data, (int) recording.getDeclaredRateHz(), bitsOf(recording),
                         signalsOf(experiment, recording));
                 recording.setSizeBytes(size);
-                recording.setSha256(FileChecksum.sha256(data));
+                recording.setSha256(Sha256.ofFile(data));
                 if (!RecordingFiles.relativeTo(notebookFile, data).equals(recording.getPath())) {
                     throw new IllegalStateException("recording path " + recording.getPath() + " is not relative");
                 }

@@ -13,8 +13,8 @@ import java.util.Map;
 
 import org.eclipse.emf.common.util.Diagnostic;
 import org.eclipse.emf.common.util.DiagnosticChain;
+import org.foldbook.io.Sha256;
 import org.foldbook.model.Recording;
-import org.foldbook.model.persistence.FileChecksum;
 import org.foldbook.model.persistence.RecordingFiles;
 
 /** The data file a recording names is still there and still holds the bytes it was logged with. */
@@ -55,7 +55,7 @@ public final class RecordingFileRule {
                         "Restore the original file from a backup; if the change is intended, log it as a new"
                                 + " recording");
             }
-            actual = FileChecksum.sha256(file);
+            actual = Sha256.ofFile(file);
         } catch (IOException e) {
             return report(diagnostics, Diagnostic.ERROR, RECORDING_FILE_MISSING, recording,
                     "the data file " + file + " cannot be read (" + e.getMessage() + ")",
