@@ -26,7 +26,7 @@ import org.foldbook.model.derived.ChainFigures;
 import org.foldbook.model.persistence.NotebookStore;
 import org.foldbook.model.persistence.RecordingFiles;
 import org.foldbook.model.util.NotebookValidator;
-import org.foldbook.model.validation.Findings;
+import org.foldbook.model.validation.FindingKind;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
@@ -82,7 +82,7 @@ class GearboxDemoTest {
             assertEquals(Diagnostic.WARNING, d.getSeverity());
         }
         Diagnostic short_ = findings.get(0);
-        assertEquals(Findings.PROTECTION_SHORT_OF_NEED, short_.getCode());
+        assertEquals(FindingKind.PROTECTION_SHORT_OF_NEED, FindingKind.of(short_).orElseThrow());
         assertEquals("CH-HZ", ((SignalChain) short_.getData().get(0)).getId());
         // need 110 dB range − 30 dBFS = 80 dB; Butterworth 4 at 10 kHz gives 10·log10(1 + 1.28^8) = 9.1 dB at
         // fs/2 = 12.8 kHz (|H|² = 1/(1+(f/fc)^2n), hand-computed), margin 9.1 − 80 = −70.9 dB
@@ -98,7 +98,7 @@ class GearboxDemoTest {
         assertTrue(m.contains("steeper filter or a lower cutoff, or sample faster"), m);
 
         Diagnostic bypassed = findings.get(1);
-        assertEquals(Findings.UNPROTECTED_BAND_FOLDS, bypassed.getCode());
+        assertEquals(FindingKind.UNPROTECTED_BAND_FOLDS, FindingKind.of(bypassed).orElseThrow());
         assertEquals("CH-BZ", ((SignalChain) bypassed.getData().get(0)).getId());
         // fs = 25.6 kS/s, front end to max(20 kHz, resonance 32 kHz) = 32 kHz ≥ fs, so the images cover
         // all of [0, fs/2] = [0, 12.8 kHz] (sampling theorem, worked by hand)
@@ -161,7 +161,7 @@ class GearboxDemoTest {
         byte[] bytes = Files.readAllBytes(vibration);
         bytes[bytes.length - 1] ^= 1;
         Files.write(vibration, bytes);
-        assertTrue(findings(notebook).stream().anyMatch(d -> d.getCode() == Findings.RECORDING_CHECKSUM_CHANGED),
+        assertTrue(findings(notebook).stream().anyMatch(d -> FindingKind.of(d).orElse(null) == FindingKind.RECORDING_CHECKSUM_CHANGED),
                 "a flipped bit must be reported");
     }
 

@@ -73,14 +73,13 @@ class NotebookRulesTest {
         }
     }
 
-    private List<Diagnostic> withCode(int code) {
-        return findings().stream().filter(d -> d.getCode() == code
-                && org.foldbook.model.util.NotebookValidator.DIAGNOSTIC_SOURCE.equals(d.getSource())).toList();
+    private List<Diagnostic> withCode(FindingKind kind) {
+        return findings().stream().filter(d -> FindingKind.of(d).orElse(null) == kind).toList();
     }
 
-    private Diagnostic single(int code) {
-        List<Diagnostic> found = withCode(code);
-        assertEquals(1, found.size(), () -> "expected one finding " + code + ", got " + findings());
+    private Diagnostic single(FindingKind kind) {
+        List<Diagnostic> found = withCode(kind);
+        assertEquals(1, found.size(), () -> "expected one finding " + kind + ", got " + findings());
         return found.get(0);
     }
 
@@ -98,7 +97,7 @@ class NotebookRulesTest {
         ((Camera) notebook.getDevices().get(4)).getFrameRatesHz().add(0.0);
         vibrationChain(notebook).getStages().get(3).setRateHz(-20000.0);
         notebook.getExperiments().get(0).getChannels().get(0).getSweepPlan().setMinRateHz(0);
-        List<String> messages = withCode(Findings.RATE_NOT_POSITIVE).stream().map(Diagnostic::getMessage).toList();
+        List<String> messages = withCode(FindingKind.RATE_NOT_POSITIVE).stream().map(Diagnostic::getMessage).toList();
         assertEquals(5, messages.size(), messages::toString);
         assertTrue(messages.stream().anyMatch(m -> m.startsWith("recording 'data/run1.wav'")), messages::toString);
         assertTrue(messages.stream().anyMatch(m -> m.startsWith("digitizer 'ADC-1'")), messages::toString);
@@ -114,9 +113,9 @@ class NotebookRulesTest {
     void cutoffAtNyquist() {
         Stage filter = vibrationChain(notebook).getStages().get(2);
         filter.setCutoffHz(9990.0);
-        assertEquals(List.of(), withCode(Findings.CUTOFF_AT_OR_ABOVE_NYQUIST));
+        assertEquals(List.of(), withCode(FindingKind.CUTOFF_AT_OR_ABOVE_NYQUIST));
         filter.setCutoffHz(10000.0);
-        Diagnostic finding = single(Findings.CUTOFF_AT_OR_ABOVE_NYQUIST);
+        Diagnostic finding = single(FindingKind.CUTOFF_AT_OR_ABOVE_NYQUIST);
         assertEquals(Diagnostic.ERROR, finding.getSeverity());
         assertTrue(finding.getMessage().startsWith("chain 'vibration Z' of rig 'bench A'"), finding.getMessage());
         assertTrue(finding.getMessage().contains("cutoff 10.00 kHz is at or above the Nyquist frequency 10.00 kHz"),
@@ -124,7 +123,7 @@ class NotebookRulesTest {
         // the stage setting wins over the device's own cutoff; unset, the device's applies
         filter.setCutoffHz(null);
         ((AntiAliasFilter) filter.getDevice()).setCutoffHz(12000.0);
-        single(Findings.CUTOFF_AT_OR_ABOVE_NYQUIST);
+        single(FindingKind.CUTOFF_AT_OR_ABOVE_NYQUIST);
     }
 
     @Test
@@ -135,9 +134,9 @@ class NotebookRulesTest {
         sensor.setUsableMaxHz(40000.0);
         sensor.setResonanceHz(null);
         // with the Butterworth in the chain: protected, no warning
-        assertEquals(List.of(), withCode(Findings.UNPROTECTED_BAND_FOLDS));
+        assertEquals(List.of(), withCode(FindingKind.UNPROTECTED_BAND_FOLDS));
         chain.getStages().remove(2);
-        Diagnostic finding = single(Findings.UNPROTECTED_BAND_FOLDS);
+        Diagnostic finding = single(FindingKind.UNPROTECTED_BAND_FOLDS);
         assertEquals(Diagnostic.WARNING, finding.getSeverity());
         assertTrue(finding.getMessage().contains("from 10.00 kHz to 40.00 kHz will fold into 0.000 Hz to 10.00 kHz"),
                 finding.getMessage());
@@ -150,12 +149,12 @@ class NotebookRulesTest {
         SignalChain chain = vibrationChain(notebook);
         chain.getStages().remove(2);
         Sensor sensor = (Sensor) chain.getStages().get(0).getDevice();
-        assertEquals(List.of(), withCode(Findings.UNPROTECTED_BAND_FOLDS), "resonance 9 kHz is below Nyquist");
+        assertEquals(List.of(), withCode(FindingKind.UNPROTECTED_BAND_FOLDS), "resonance 9 kHz is below Nyquist");
         sensor.setResonanceHz(15000.0);
-        assertTrue(single(Findings.UNPROTECTED_BAND_FOLDS).getMessage().contains("into 5.000 kHz to 10.00 kHz"));
+        assertTrue(single(FindingKind.UNPROTECTED_BAND_FOLDS).getMessage().contains("into 5.000 kHz to 10.00 kHz"));
         // an amplifier rolling off at 9.5 kHz bounds what reaches the digitizer: no warning
         ((org.foldbook.model.Amplifier) chain.getStages().get(1).getDevice()).setBandwidthHighHz(9500.0);
-        assertEquals(List.of(), withCode(Findings.UNPROTECTED_BAND_FOLDS));
+        assertEquals(List.of(), withCode(FindingKind.UNPROTECTED_BAND_FOLDS));
     }
 
     @Test
@@ -164,9 +163,9 @@ class NotebookRulesTest {
         SignalChain chain = vibrationChain(notebook);
         ((Sensor) chain.getStages().get(0).getDevice()).setUsableMaxHz(40000.0);
         ((AntiAliasFilter) chain.getStages().get(2).getDevice()).setFamily(FilterFamily.NONE);
-        single(Findings.UNPROTECTED_BAND_FOLDS);
+        single(FindingKind.UNPROTECTED_BAND_FOLDS);
         ((Digitizer) chain.getStages().get(3).getDevice()).setDigitalFilter(true);
-        assertEquals(List.of(), withCode(Findings.UNPROTECTED_BAND_FOLDS));
+        assertEquals(List.of(), withCode(FindingKind.UNPROTECTED_BAND_FOLDS));
     }
 
     @Test
@@ -179,9 +178,9 @@ class NotebookRulesTest {
         sensor.setResonanceHz(null);
         digitizer.setDynamicRangeDb(100.0);
         // no out-of-band level stated: the table shows the worst case, the rule stays quiet
-        assertEquals(List.of(), withCode(Findings.PROTECTION_SHORT_OF_NEED));
+        assertEquals(List.of(), withCode(FindingKind.PROTECTION_SHORT_OF_NEED));
         chain.setOutOfBandLevelDbfs(-40.0);
-        Diagnostic finding = single(Findings.PROTECTION_SHORT_OF_NEED);
+        Diagnostic finding = single(FindingKind.PROTECTION_SHORT_OF_NEED);
         assertEquals(Diagnostic.WARNING, finding.getSeverity());
         String m = finding.getMessage();
         // Butterworth |H|² = 1/(1+(f/fc)^2n): 10·log10(1 + 2.5^8) = 31.84 dB at 10 kHz; margin 31.84 − 60 = −28.2 dB
@@ -192,12 +191,12 @@ class NotebookRulesTest {
         assertTrue(m.contains("26.50 kS/s keeps 0 to 4.000 kHz alias-free"), m);
         // with enough attenuation (content at −80 dBFS needs 20 dB only) the rule is quiet
         chain.setOutOfBandLevelDbfs(-80.0);
-        assertEquals(List.of(), withCode(Findings.PROTECTION_SHORT_OF_NEED));
+        assertEquals(List.of(), withCode(FindingKind.PROTECTION_SHORT_OF_NEED));
         // an unfiltered chain is the other rule's business
         chain.setOutOfBandLevelDbfs(-40.0);
         chain.getStages().remove(2);
-        assertEquals(List.of(), withCode(Findings.PROTECTION_SHORT_OF_NEED));
-        single(Findings.UNPROTECTED_BAND_FOLDS);
+        assertEquals(List.of(), withCode(FindingKind.PROTECTION_SHORT_OF_NEED));
+        single(FindingKind.UNPROTECTED_BAND_FOLDS);
     }
 
     @Test
@@ -210,7 +209,7 @@ class NotebookRulesTest {
         chain.setOutOfBandLevelDbfs(0.0);
         // 146 dB (ideal 24-bit) at 0 dBFS: Butterworth 4 at 4 kHz reaches it only near 4 kHz·10^(146.26/80) = 270 kHz,
         // beyond the sensor's 200 kHz: every rate up to 51.2 kS/s leaves 200 kHz content folding under-attenuated
-        String m = single(Findings.PROTECTION_SHORT_OF_NEED).getMessage();
+        String m = single(FindingKind.PROTECTION_SHORT_OF_NEED).getMessage();
         assertTrue(m.contains("ideal 24-bit SNR") && m.contains("no rate up to the digitizer's 51.20 kS/s"), m);
     }
 
@@ -219,7 +218,7 @@ class NotebookRulesTest {
     void chainMustSample() {
         SignalChain chain = vibrationChain(notebook);
         chain.getStages().remove(3);
-        Diagnostic finding = single(Findings.NO_SAMPLING_STAGE);
+        Diagnostic finding = single(FindingKind.NO_SAMPLING_STAGE);
         assertTrue(finding.getMessage().startsWith("chain 'vibration Z'"), finding.getMessage());
         assertTrue(finding.getMessage().contains("Add the digitizer or camera"), finding.getMessage());
     }
@@ -229,13 +228,13 @@ class NotebookRulesTest {
     void indexInsideRecording() {
         Channel channel = notebook.getExperiments().get(0).getChannels().get(0);
         channel.setChannelIndex(2);
-        Diagnostic finding = single(Findings.INDEX_OUTSIDE_RECORDING);
+        Diagnostic finding = single(FindingKind.INDEX_OUTSIDE_RECORDING);
         assertTrue(finding.getMessage().startsWith("channel 'plate Z' of experiment 'run 1'"), finding.getMessage());
         assertTrue(finding.getMessage().contains("indices 0 to 1"), finding.getMessage());
         channel.setChannelIndex(-1);
-        single(Findings.INDEX_OUTSIDE_RECORDING);
+        single(FindingKind.INDEX_OUTSIDE_RECORDING);
         channel.setChannelIndex(0);
-        assertEquals(List.of(), withCode(Findings.INDEX_OUTSIDE_RECORDING));
+        assertEquals(List.of(), withCode(FindingKind.INDEX_OUTSIDE_RECORDING));
     }
 
     @Test
@@ -244,23 +243,23 @@ class NotebookRulesTest {
         Path data = folder.resolve("data/run1.wav");
         Files.write(data, "abc".getBytes(StandardCharsets.US_ASCII));
         recording.setSizeBytes(0L);
-        Diagnostic changed = single(Findings.RECORDING_CHECKSUM_CHANGED);
+        Diagnostic changed = single(FindingKind.RECORDING_CHECKSUM_CHANGED);
         // FIPS 180-2, appendix B.1: SHA-256("abc")
         assertTrue(changed.getMessage().contains("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad"),
                 changed.getMessage());
         assertTrue(changed.getMessage().contains("Restore the original"), changed.getMessage());
         // a logged size that differs is reported without hashing
         recording.setSizeBytes(44L);
-        assertTrue(single(Findings.RECORDING_CHECKSUM_CHANGED).getMessage().contains("is now 3 bytes, but 44 bytes"));
+        assertTrue(single(FindingKind.RECORDING_CHECKSUM_CHANGED).getMessage().contains("is now 3 bytes, but 44 bytes"));
         recording.setSizeBytes(3L);
-        assertTrue(single(Findings.RECORDING_CHECKSUM_CHANGED).getMessage().contains("SHA-256 now"));
+        assertTrue(single(FindingKind.RECORDING_CHECKSUM_CHANGED).getMessage().contains("SHA-256 now"));
         Files.delete(data);
-        Diagnostic missing = single(Findings.RECORDING_FILE_MISSING);
+        Diagnostic missing = single(FindingKind.RECORDING_FILE_MISSING);
         assertTrue(missing.getMessage().contains(data.toString()), missing.getMessage());
         Files.write(data, new byte[0]);
         recording.setSizeBytes(0L);
-        assertEquals(List.of(), withCode(Findings.RECORDING_FILE_MISSING));
-        assertEquals(List.of(), withCode(Findings.RECORDING_CHECKSUM_CHANGED));
+        assertEquals(List.of(), withCode(FindingKind.RECORDING_FILE_MISSING));
+        assertEquals(List.of(), withCode(FindingKind.RECORDING_CHECKSUM_CHANGED));
     }
 
     @Test
@@ -268,9 +267,9 @@ class NotebookRulesTest {
     void exposureVersusFramePeriod() {
         Stage frames = videoChain(notebook).getStages().get(0);
         frames.setExposureS(0.008);
-        assertEquals(List.of(), withCode(Findings.EXPOSURE_LONGER_THAN_FRAME));
+        assertEquals(List.of(), withCode(FindingKind.EXPOSURE_LONGER_THAN_FRAME));
         frames.setExposureS(0.010);
-        Diagnostic finding = single(Findings.EXPOSURE_LONGER_THAN_FRAME);
+        Diagnostic finding = single(FindingKind.EXPOSURE_LONGER_THAN_FRAME);
         assertTrue(finding.getMessage().contains("frame period 8.333 ms"), finding.getMessage());
         assertTrue(finding.getMessage().contains("lower the frame rate to at most 100.0 Hz"), finding.getMessage());
     }
@@ -280,9 +279,9 @@ class NotebookRulesTest {
     void unitsMatch() {
         Channel channel = notebook.getExperiments().get(0).getChannels().get(0);
         channel.setUnit("m/s\u00B2");
-        assertEquals(List.of(), withCode(Findings.UNIT_MISMATCH));
+        assertEquals(List.of(), withCode(FindingKind.UNIT_MISMATCH));
         channel.setUnit("g");
-        Diagnostic finding = single(Findings.UNIT_MISMATCH);
+        Diagnostic finding = single(FindingKind.UNIT_MISMATCH);
         assertTrue(finding.getMessage().contains("unit 'g' differs from 'm/s^2' measured by sensor 'ACC-1'"),
                 finding.getMessage());
     }
@@ -293,17 +292,17 @@ class NotebookRulesTest {
         Experiment experiment = notebook.getExperiments().get(0);
         Rig rig = experiment.getRig();
         experiment.setDate(day(2026, 12, 31));
-        assertEquals(List.of(), withCode(Findings.RIG_OUTSIDE_VALIDITY), "last valid day is inside");
+        assertEquals(List.of(), withCode(FindingKind.RIG_OUTSIDE_VALIDITY), "last valid day is inside");
         experiment.setDate(day(2027, 1, 1));
-        Diagnostic finding = single(Findings.RIG_OUTSIDE_VALIDITY);
+        Diagnostic finding = single(FindingKind.RIG_OUTSIDE_VALIDITY);
         assertTrue(finding.getMessage().contains("dated 2027-01-01, but rig 'bench A' is valid only from 2026-01-01 to 2026-12-31"),
                 finding.getMessage());
         rig.setValidUntil(null);
-        assertEquals(List.of(), withCode(Findings.RIG_OUTSIDE_VALIDITY), "open-ended rig");
+        assertEquals(List.of(), withCode(FindingKind.RIG_OUTSIDE_VALIDITY), "open-ended rig");
         experiment.setDate(day(2025, 12, 31));
-        single(Findings.RIG_OUTSIDE_VALIDITY);
+        single(FindingKind.RIG_OUTSIDE_VALIDITY);
         rig.setValidUntil(day(2025, 6, 1));
-        single(Findings.RIG_VALIDITY_REVERSED);
+        single(FindingKind.RIG_VALIDITY_REVERSED);
     }
 
     @Test
@@ -311,7 +310,7 @@ class NotebookRulesTest {
     void unsavedNotebook() {
         Notebook fresh = SyntheticNotebooks.bench();
         notebook = fresh;
-        Diagnostic finding = single(Findings.RECORDING_NOT_CHECKABLE);
+        Diagnostic finding = single(FindingKind.RECORDING_NOT_CHECKABLE);
         assertEquals(Diagnostic.WARNING, finding.getSeverity());
         assertTrue(finding.getMessage().contains("Save the notebook"), finding.getMessage());
         assertEquals(1, findings().size(), () -> findings().toString());

@@ -1,12 +1,12 @@
 package org.foldbook.model.validation;
 
-import static org.foldbook.model.validation.Findings.CUTOFF_AT_OR_ABOVE_NYQUIST;
-import static org.foldbook.model.validation.Findings.EXPOSURE_LONGER_THAN_FRAME;
-import static org.foldbook.model.validation.Findings.NO_SAMPLING_STAGE;
-import static org.foldbook.model.validation.Findings.PROTECTION_SHORT_OF_NEED;
-import static org.foldbook.model.validation.Findings.UNPROTECTED_BAND_FOLDS;
-import static org.foldbook.model.validation.Findings.hz;
-import static org.foldbook.model.validation.Findings.report;
+import static org.foldbook.model.validation.FindingKind.CUTOFF_AT_OR_ABOVE_NYQUIST;
+import static org.foldbook.model.validation.FindingKind.EXPOSURE_LONGER_THAN_FRAME;
+import static org.foldbook.model.validation.FindingKind.NO_SAMPLING_STAGE;
+import static org.foldbook.model.validation.FindingKind.PROTECTION_SHORT_OF_NEED;
+import static org.foldbook.model.validation.FindingKind.UNPROTECTED_BAND_FOLDS;
+import static org.foldbook.model.validation.FindingReport.hz;
+import static org.foldbook.model.validation.FindingReport.report;
 
 import java.util.Locale;
 import java.util.Map;

@@ -1,9 +1,8 @@
 package org.foldbook.model.validation;
 
-import org.foldbook.model.derived.Names;
-import static org.foldbook.model.validation.Findings.INDEX_OUTSIDE_RECORDING;
-import static org.foldbook.model.validation.Findings.UNIT_MISMATCH;
-import static org.foldbook.model.validation.Findings.report;
+import static org.foldbook.model.validation.FindingKind.INDEX_OUTSIDE_RECORDING;
+import static org.foldbook.model.validation.FindingKind.UNIT_MISMATCH;
+import static org.foldbook.model.validation.FindingReport.report;
 
 import java.util.Map;
 
@@ -14,6 +13,7 @@ import org.foldbook.model.Recording;
 import org.foldbook.model.Sensor;
 import org.foldbook.model.Stage;
 import org.foldbook.model.derived.ChainFigures;
+import org.foldbook.model.derived.Names;
 
 /** Rules linking a channel to its recording and to the sensor of its chain. */
 public final class ChannelRules {

@@ -1,8 +1,8 @@
 package org.foldbook.model.validation;
 
-import static org.foldbook.model.validation.Findings.RATE_NOT_POSITIVE;
-import static org.foldbook.model.validation.Findings.hz;
-import static org.foldbook.model.validation.Findings.report;
+import static org.foldbook.model.validation.FindingKind.RATE_NOT_POSITIVE;
+import static org.foldbook.model.validation.FindingReport.hz;
+import static org.foldbook.model.validation.FindingReport.report;
 
 import java.util.Map;
 

@@ -1,9 +1,9 @@
 package org.foldbook.model.validation;
 
-import static org.foldbook.model.validation.Findings.RECORDING_CHECKSUM_CHANGED;
-import static org.foldbook.model.validation.Findings.RECORDING_FILE_MISSING;
-import static org.foldbook.model.validation.Findings.RECORDING_NOT_CHECKABLE;
-import static org.foldbook.model.validation.Findings.report;
+import static org.foldbook.model.validation.FindingKind.RECORDING_CHECKSUM_CHANGED;
+import static org.foldbook.model.validation.FindingKind.RECORDING_FILE_MISSING;
+import static org.foldbook.model.validation.FindingKind.RECORDING_NOT_CHECKABLE;
+import static org.foldbook.model.validation.FindingReport.report;
 
 import java.io.IOException;
 import java.nio.file.Files;

@@ -1,9 +1,8 @@
 package org.foldbook.model.validation;
 
-import org.foldbook.model.derived.Names;
-import static org.foldbook.model.validation.Findings.RIG_OUTSIDE_VALIDITY;
-import static org.foldbook.model.validation.Findings.RIG_VALIDITY_REVERSED;
-import static org.foldbook.model.validation.Findings.report;
+import static org.foldbook.model.validation.FindingKind.RIG_OUTSIDE_VALIDITY;
+import static org.foldbook.model.validation.FindingKind.RIG_VALIDITY_REVERSED;
+import static org.foldbook.model.validation.FindingReport.report;
 
 import java.time.LocalDate;
 import java.time.ZoneOffset;
@@ -14,6 +13,7 @@ import org.eclipse.emf.common.util.Diagnostic;
 import org.eclipse.emf.common.util.DiagnosticChain;
 import org.foldbook.model.Experiment;
 import org.foldbook.model.Rig;
+import org.foldbook.model.derived.Names;
 
 /**
  * A rig's configuration holds over a range of days (both ends inclusive, compared as UTC dates); an
