@@ -78,12 +78,24 @@ class WorkbenchSmokeTest {
         Path demo = out.resolve("workspace/demo/gearbox-stand.foldbook");
         assertTrue(Files.isRegularFile(demo), "no demo notebook at " + demo + "; console:\n" + console);
         assertTrue(Files.isRegularFile(out.resolve("workspace/demo/data/vibration-run1.wav")), "no demo recording");
-        assertTrue(!console.contains("!ENTRY") || !console.contains("Exception"),
-                "the workbench logged an exception:\n" + console);
+        // a clean start logs neither a framework log entry nor an exception, on the console or in the
+        // workspace log (-consoleLog copies entries to the console; the .log file is written as well)
+        assertEquals(List.of(), problemLines(console), "the workbench logged problems; console:\n" + console);
+        Path workspaceLog = out.resolve("workspace/.metadata/.log");
+        if (Files.exists(workspaceLog)) {
+            String log = Files.readString(workspaceLog);
+            assertEquals(List.of(), problemLines(log), "the workspace log holds problems:\n" + log);
+        }
 
         BufferedImage shot = ImageIO.read(out.resolve("workbench.png").toFile());
         assertTrue(shot.getWidth() >= 800 && shot.getHeight() >= 500, "screenshot too small: " + shot.getWidth() + "x" + shot.getHeight());
         assertTrue(distinctColours(shot) > 20, "the screenshot is (nearly) a single colour: nothing was drawn");
+    }
+
+    /** Lines that are a framework log entry ("!ENTRY", "!MESSAGE", "!STACK") or mention an exception. */
+    static List<String> problemLines(String log) {
+        return log.lines().filter(l -> l.startsWith("!ENTRY") || l.startsWith("!MESSAGE") || l.startsWith("!STACK")
+                || l.contains("Exception")).toList();
     }
 
     private static Path launcherJar(Path product) throws IOException {
