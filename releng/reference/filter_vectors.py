@@ -8,6 +8,10 @@ Writes small CSV files into bundles/org.foldbook.dsp.tests/resources/reference/f
   digital_response.csv |H(e^jw)| from scipy.signal.sosfreqz
   digital_output.csv   scipy.signal.sosfilt of a synthetic test signal, from rest and from the
                        steady state sosfilt_zi(sos)*x[0]
+  exact_cases.csv      chains for the exact (frequency-domain) modelled mode at fs0 = 100 kS/s:
+                       low-passes at fs0/fc = 2..200, a sensor resonance, a conditioner band-pass
+  exact_response.csv   H(j*2*pi*f) of each over 0..0.49*fs0 (freqs_zpk; scipy.signal.freqs for the
+                       resonance, written as b/a like a data sheet gives it)
 
 The test signal is SYNTHETIC (made here by formula, not a recording):
   x[n] = sin(2*pi*0.013*n) + 0.5*sin(2*pi*0.31*n + 0.3) + 0.7*(n >= 40) + 0.25, n = 0..119
@@ -121,7 +125,64 @@ def main():
             y1, _ = signal.sosfilt(sos, x, zi=signal.sosfilt_zi(sos) * x[0])
             for k in range(len(x)):
                 wo.writerow([i, k, g(x[k]), g(y0[k]), g(y1[k])])
+    write_exact(head)
     print("wrote", os.path.normpath(OUT), file=sys.stderr)
+
+
+FS0 = 100000.0
+
+
+def exact_cases():
+    """(kind, order, ripple, stopband, norm, a, b): a = fs0/fc for low-passes, fn/Q, or fh/fl in Hz."""
+    cases = []
+    for n in (1, 4, 8):
+        for r in (2, 5, 10, 50, 200):
+            cases.append(("butterworth", n, 0, 0, "", r, 0))
+    for r in (2, 10, 200):
+        cases.append(("bessel", 4, 0, 0, "mag", r, 0))
+        cases.append(("chebyshev1", 6, 0.5, 0, "", r, 0))
+        cases.append(("elliptic", 8, 0.1, 80, "", r, 0))
+    cases.append(("resonance", 2, 0, 0, "", 20000.0, 10.0))
+    cases.append(("resonance", 2, 0, 0, "", 40000.0, 25.0))
+    cases.append(("bandpass", 2, 0, 0, "", 10.0, 20000.0))
+    return cases
+
+
+def exact_grid():
+    f = np.concatenate([np.linspace(0, 0.49 * FS0, 50), np.logspace(1, np.log10(0.49 * FS0), 20),
+                        FS0 * np.array([0.45, 0.47, 0.48, 0.485])])
+    return np.unique(f)
+
+
+def exact_response(case, f):
+    kind, n, rp, rs, norm, a, b = case
+    w = 2 * np.pi * f
+    if kind == "resonance":
+        wn = 2 * np.pi * a
+        _, h = signal.freqs([wn * wn], [1.0, wn / b, wn * wn], worN=w)
+        return h
+    if kind == "bandpass":
+        wh, wl = 2 * np.pi * a, 2 * np.pi * b
+        _, h = signal.freqs_zpk([0.0], [-wh, -wl], wl, worN=w)
+        return h
+    z, p, k = design(kind, n, rp, rs, norm, 2 * np.pi * FS0 / a, output="zpk")
+    _, h = signal.freqs_zpk(z, p, k, worN=w)
+    return h
+
+
+def write_exact(head):
+    f = exact_grid()
+    with open(os.path.join(OUT, "exact_cases.csv"), "w", newline="") as fc, \
+         open(os.path.join(OUT, "exact_response.csv"), "w", newline="") as fr:
+        fc.write(head + " (fs0 = %r Hz)\n" % FS0)
+        fr.write(head + "\n")
+        wc, wr = csv.writer(fc, lineterminator="\n"), csv.writer(fr, lineterminator="\n")
+        wc.writerow(["case", "kind", "order", "ripple_db", "stopband_db", "norm", "a", "b"])
+        wr.writerow(["case", "f_hz", "re", "im"])
+        for i, c in enumerate(exact_cases()):
+            wc.writerow([i] + list(c))
+            for fv, hv in zip(f, exact_response(c, f)):
+                wr.writerow([i, g(fv), g(hv.real), g(hv.imag)])
 
 
 if __name__ == "__main__":

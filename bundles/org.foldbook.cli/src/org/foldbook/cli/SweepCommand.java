@@ -138,7 +138,7 @@ final class SweepCommand {
             case "bare" -> Resampling.bare();
             case "modelled" -> Resampling.modelledChannel(channel(o));
             case "ideal" -> Resampling.idealDecimator();
-            case "peer-poly" -> Resampling.peerResamplePoly();
+            case "polyphase-default" -> Resampling.polyphaseDefault();
             case "preview" -> Resampling.modelledChannel(channel(o));
             default -> throw new IllegalArgumentException("--mode " + o.mode());
         };

@@ -19,7 +19,7 @@ import java.util.Optional;
  * @param spacing    {@code geom} or {@code lin}
  * @param rates      explicit requested rates (empty array: none)
  * @param maxDen     denominator bound of the up/down ratios
- * @param mode       bare, modelled, ideal, peer-poly or preview
+ * @param mode       bare, modelled, ideal, polyphase-default or preview
  * @param filter     chain filter for modelled/preview: {@code butterworth:ORDER:HZ}, {@code bessel:ORDER:HZ},
  *                   {@code rc:HZ}
  * @param digitizer  digitizer built-in filter for modelled/preview: pass fraction, stop fraction (of the new
@@ -40,7 +40,8 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
     static final String USAGE = """
             usage: foldbook sweep --input FILE [--rate HZ] [--channel N]
                      (--grid FILE | --to HZ --steps N [--from HZ] [--spacing geom|lin] | --rates HZ,HZ,...)
-                     [--max-den D] [--mode bare|modelled|ideal|peer-poly|preview] [--filter KIND:...]
+                     [--max-denominator D] [--mode bare|modelled|ideal|polyphase-default|preview]
+                     [--filter KIND:...]
                      [--digitizer PASS:STOP:DB] [--exposure SECONDS]
                      [--band LO:HI] [--threads N] [--format json|csv] [--output FILE] [--quiet]
               --input FILE    WAV recording, or raw little-endian float64 samples (then --rate is required)
@@ -50,10 +51,11 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
               --from/--to/--steps  requested rates from..to (from defaults to the recording's rate)
               --spacing       geom (default, equal ratios) or lin
               --rates         explicit list of requested rates
-              --max-den D     bound of the ratio denominators (default 1000)
-              --mode          bare (default): no anti-alias filter; modelled: the --filter chain, then bare;
-                              ideal: a correct decimator (0.45/0.5 fs, 100 dB); peer-poly: scipy
-                              resample_poly's defaults; preview: fold the source PSD through --filter (or none)
+              --max-denominator D  bound of the ratio denominators (default 1000)
+              --mode          bare (default): no anti-alias filter; modelled: the --filter chain with its
+                              exact response, then bare; ideal: a correct decimator (0.45/0.5 fs, 100 dB);
+                              polyphase-default: the default filter of a common polyphase resampler, for
+                              side-by-side checks; preview: fold the source PSD through --filter (or none)
               --filter        butterworth:ORDER:CUTOFF_HZ, bessel:ORDER:CUTOFF_HZ or rc:CUTOFF_HZ
               --digitizer P:S:DB  a digitizer's built-in filter: pass band to P*fs, S*fs on at least DB dB down
                               (delta-sigma parts: about 0.45:0.55:90, common practice)
@@ -114,8 +116,8 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
                         rates[k] = positive(a, parts[k].strip());
                     }
                 }
-                case "--max-den" -> maxDen = integer(a, v, 1);
-                case "--mode" -> mode = oneOf(a, v, "bare", "modelled", "ideal", "peer-poly", "preview");
+                case "--max-denominator" -> maxDen = integer(a, v, 1);
+                case "--mode" -> mode = oneOf(a, v, "bare", "modelled", "ideal", "polyphase-default", "preview");
                 case "--filter" -> filter = v;
                 case "--digitizer" -> {
                     String[] p = v.split(":");

@@ -47,9 +47,9 @@ class PeerAgreementTest {
     }
 
     @Test
-    @DisplayName("peer-poly mode: every rate's peaks = peer mode b (scipy.signal.resample_poly defaults)")
+    @DisplayName("polyphase-default mode: every rate's peaks = peer mode b (scipy.signal.resample_poly defaults)")
     void peerPolyModeMatchesPeerModeB() {
-        SweepResult r = engine.run(signal, grid, Resampling.peerResamplePoly(), SpectrumSettings.DEFAULT,
+        SweepResult r = engine.run(signal, grid, Resampling.polyphaseDefault(), SpectrumSettings.DEFAULT,
                 SweepProgress.NONE);
         assertSameAsPeer(r, MiniJson.arr(details.get("b")));
     }

@@ -99,4 +99,31 @@ class SweepResultFormatTest {
             assertEquals(9, lines[i].split(",", -1).length, lines[i]);
         }
     }
+
+    @Test
+    @DisplayName("JSON: the band the mode is accurate in, and the modelled chain's warnings naming the uncertain bands")
+    void accuracyAndWarnings() {
+        double fs0 = 96_000;
+        double[] x = Tones.of(1 << 15, fs0, new double[] {31_000, 44_000}, new double[] {1, 1}, 1e-6, 4);
+        try (SweepEngine e = new SweepEngine(1)) {
+            // a 4-pole Butterworth at 40 kHz passes about -17 dB at fs0/2: content above it was never recorded
+            SweepResult r = e.run(x, RateLadder.ofRates(fs0, new double[] {24_000}, 100),
+                    Resampling.modelledFilter(org.foldbook.dsp.filter.AnalogLowPass.butterworth(4, 40_000)),
+                    SpectrumSettings.DEFAULT, SweepProgress.NONE);
+            Map<String, Object> root = MiniJson.obj(MiniJson.parse(r.toJson()));
+            Map<String, Object> acc = MiniJson.obj(root.get("accuracy"));
+            assertEquals(0.49 * fs0, (Double) acc.get("upToHz"), 1e-9);
+            assertTrue(((String) acc.get("statement")).contains("0.1 dB"));
+            List<Object> w = MiniJson.arr(root.get("warnings"));
+            assertEquals(2, w.size(), w.toString());
+            Map<String, Object> unrecorded = MiniJson.obj(w.get(1));
+            assertEquals(fs0 / 2, (Double) unrecorded.get("fromHz"), 1e-9);
+            assertNull(unrecorded.get("uncertaintyDb"), "content may be missing altogether: no finite bound");
+            assertTrue(((String) unrecorded.get("text")).contains("missing"));
+            SweepResult bare = e.run(x, RateLadder.ofRates(fs0, new double[] {24_000}, 100), Resampling.bare(),
+                    SpectrumSettings.DEFAULT, SweepProgress.NONE);
+            assertEquals(0.39 * fs0, bare.accuracy().upToHz(), 1e-9);
+            assertTrue(bare.warnings().isEmpty());
+        }
+    }
 }

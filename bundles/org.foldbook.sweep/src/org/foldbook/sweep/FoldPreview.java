@@ -156,6 +156,7 @@ public final class FoldPreview {
             rates.add(preview(s, chain));
         }
         return new SweepResult("preview-" + chain.name(), source.sourceRate(), source.samples(), source.binWidth(),
-                source.peaks(), rates, Optional.empty());
+                source.peaks(), rates, Optional.empty(), chain.accuracy(source.sourceRate()),
+                chain.warnings(source.sourceRate()));
     }
 }

@@ -1,17 +1,19 @@
 package org.foldbook.sweep;
 
+import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.concurrent.ConcurrentHashMap;
 
 import org.foldbook.dsp.filter.AnalogFilter;
-import org.foldbook.dsp.filter.SecondOrderSections;
 import org.foldbook.dsp.resample.BareSampler;
+import org.foldbook.dsp.resample.ExactChainFilter;
 import org.foldbook.dsp.resample.IdealDecimator;
 import org.foldbook.dsp.resample.KaiserPolyphaseResampler;
 import org.foldbook.dsp.resample.ModelledChannel;
 import org.foldbook.dsp.resample.ModelledChannelResampler;
 import org.foldbook.dsp.resample.Resampler;
+import org.foldbook.dsp.resample.SimulationWarning;
 
 /**
  * One way of taking the recording to a lower rate in a sweep: which re-sampler serves a rate, what is
@@ -39,6 +41,14 @@ public interface Resampling {
     /** |H(f)|² applied to source content at {@code frequencyHz} on its way to {@code step}'s rate. */
     double powerGain(double frequencyHz, RateStep step);
 
+    /** Where this simulation is accurate for a recording at {@code sourceRate}, in words and figures. */
+    SimulatorAccuracy accuracy(double sourceRate);
+
+    /** Bands where this simulation cannot honour the chain it models (none for the digital modes). */
+    default List<SimulationWarning> warnings(double sourceRate) {
+        return List.of();
+    }
+
     /** Mode 1: a digitizer with no anti-alias filter (windowed-sinc evaluation, see {@link BareSampler}). */
     static Resampling bare() {
         return Bare.INSTANCE;
@@ -53,11 +63,11 @@ public interface Resampling {
 
     /**
      * Mode 2: the channel's own modelled chain ({@link ModelledChannel}: analog filters, a digitizer's
-     * built-in filter, a camera's exposure), then sampled bare. The analog filters are realised at the source
-     * rate ({@link AnalogFilter#toDigital}, bilinear pre-warped at each cutoff) and run once over the whole
-     * recording for all rates; the digitizer filter and exposure depend on the rate and go into each rate's
-     * sampler ({@link ModelledChannelResampler}). Valid only as far as the source rate's headroom allows: the
-     * realisation follows the analog model closely well below the source Nyquist frequency, not near it.
+     * built-in filter, a camera's exposure), then sampled bare. The analog filters and the exposure are
+     * applied with their true response ({@link ExactChainFilter}: frequency domain, within 0.1 dB of the model
+     * above −120 dB over 0..0.49·fs0) once over the whole recording for all rates, at 2·fs0; the digitizer
+     * filter depends on the rate and goes into each rate's sampler ({@link ModelledChannelResampler}). What
+     * the source rate cannot honour is in {@link #warnings}.
      */
     static Resampling modelledChannel(ModelledChannel channel) {
         return new ModelledFilter(Objects.requireNonNull(channel, "channel"));
@@ -120,6 +130,14 @@ public interface Resampling {
             double t = Math.min(1.0, (u - spec.passFraction()) / (spec.stopFraction() - spec.passFraction()));
             return Math.pow(10, -spec.attenuationDb() * t / 10);
         }
+
+        @Override
+        public SimulatorAccuracy accuracy(double sourceRate) {
+            return new SimulatorAccuracy(spec.passFraction(), Double.NaN, -spec.attenuationDb(), String.format(
+                    java.util.Locale.ROOT, "a correct decimator: pass band to %.3g of each new rate, at least %.0f dB "
+                            + "from %.3g of it; what it shows is what an ideal anti-alias stage would keep",
+                    spec.passFraction(), spec.attenuationDb(), spec.stopFraction()));
+        }
     }
 
     /**
@@ -127,24 +145,24 @@ public interface Resampling {
      * 20·max(up, down)+1 taps, see {@link KaiserPolyphaseResampler#resamplePolyDefaults}), so its per-rate
      * peaks can be compared with the peer's mode b bin for bin.
      */
-    static Resampling peerResamplePoly() {
-        return PeerResamplePoly.INSTANCE;
+    static Resampling polyphaseDefault() {
+        return PolyphaseDefault.INSTANCE;
     }
 
     /** scipy's resample_poly defaults. */
-    final class PeerResamplePoly implements Resampling {
-        static final PeerResamplePoly INSTANCE = new PeerResamplePoly();
+    final class PolyphaseDefault implements Resampling {
+        static final PolyphaseDefault INSTANCE = new PolyphaseDefault();
         // |H| of that design in dB at fractions of the new rate (scipy.signal.freqz for R = 20, as
         // documented with KaiserPolyphaseResampler); beyond 0.6 the stop band lies near -65 dB.
         private static final double[] AT = {0.0, 0.40, 0.45, 0.50, 0.55, 0.60, 0.65};
         private static final double[] DB = {0.0, 0.0, -0.66, -6.0, -22.6, -55.0, -65.0};
 
-        private PeerResamplePoly() {
+        private PolyphaseDefault() {
         }
 
         @Override
         public String name() {
-            return "peer-poly";
+            return "polyphase-default";
         }
 
         @Override
@@ -170,6 +188,13 @@ public interface Resampling {
             double db = DB[i - 1] + t * (DB[i] - DB[i - 1]);
             return Math.pow(10, db / 10);
         }
+
+        @Override
+        public SimulatorAccuracy accuracy(double sourceRate) {
+            return new SimulatorAccuracy(0.40, Double.NaN, -65, "the default filter of a common polyphase resampler "
+                    + "(Kaiser, beta 5): flat to 0.40 of each new rate, -6 dB at half of it, stop band near -65 dB; "
+                    + "for side-by-side checks, not a model of any chain");
+        }
     }
 
     /** The bare sampler. */
@@ -194,18 +219,24 @@ public interface Resampling {
         public double powerGain(double frequencyHz, RateStep step) {
             return 1.0;
         }
+
+        /** BareSampler's measured accuracy: its error stays below −100 dB re a tone up to 0.39·fs0. */
+        @Override
+        public SimulatorAccuracy accuracy(double sourceRate) {
+            return new SimulatorAccuracy(Double.NaN, 0.39 * sourceRate, -100, String.format(java.util.Locale.ROOT,
+                    "bare sampling is simulated to -100 dB re each component up to %.6g Hz (0.39 of the source rate); "
+                            + "above it the interpolator attenuates content and adds images of its own", 0.39 * sourceRate));
+        }
     }
 
-    /** The modelled channel: analog part once at the source rate, the rest per rate. */
+    /** The modelled channel: analog filters and exposure once, exactly, at 2·fs0; the digitizer filter per rate. */
     final class ModelledFilter implements Resampling {
         private final ModelledChannel channel;
-        private final boolean analogOnly;
-        private final Map<Double, SecondOrderSections> realised = new ConcurrentHashMap<>();
+        private final Map<Double, ExactChainFilter> exact = new ConcurrentHashMap<>();
         private final Map<RateStep, ModelledChannelResampler> samplers = new ConcurrentHashMap<>();
 
         ModelledFilter(ModelledChannel channel) {
             this.channel = channel;
-            this.analogOnly = channel.digitizerFilter() == null && !(channel.exposureSeconds() > 0);
         }
 
         public ModelledChannel channel() {
@@ -217,59 +248,43 @@ public interface Resampling {
             return "modelled";
         }
 
-        /** The analog filters in series, realised at {@code sourceRate}; null when there are none. */
-        private SecondOrderSections realisedAt(double sourceRate) {
-            if (channel.analogFilters().isEmpty()) {
-                return null;
-            }
-            return realised.computeIfAbsent(sourceRate, fs -> {
-                SecondOrderSections all = null;
-                for (AnalogFilter a : channel.analogFilters()) {
-                    SecondOrderSections s = a.toDigital(fs);
-                    all = all == null ? s : all.followedBy(s);
-                }
-                return all;
-            });
+        private ExactChainFilter exactAt(double sourceRate) {
+            return exact.computeIfAbsent(sourceRate, fs -> ExactChainFilter.of(channel, fs));
         }
 
+        /** The recording through the analog filters and exposure, at 2·fs0 (one array for all rates). */
         @Override
         public double[] prepare(double[] source, double sourceRate) {
-            SecondOrderSections sos = realisedAt(sourceRate);
-            if (sos == null) {
-                return source;
-            }
-            double[] y = new double[source.length];
-            sos.newFilter().filter(source, 0, y, 0, source.length);
-            return y;
+            return exactAt(sourceRate).apply(source);
         }
 
+        /** Samples {@link #prepare}'s 2·fs0 series (so its {@code outputLength} counts 2·fs0 inputs). */
         @Override
         public Resampler forRate(RateStep step) {
-            if (analogOnly) {
-                return BareSampler.of(step.ratio());
-            }
             return samplers.computeIfAbsent(step, st -> ModelledChannelResampler.of(st.ratio(), st.sourceRate(),
                     channel, ModelledChannelResampler.AnalogStage.ALREADY_APPLIED));
         }
 
-        /**
-         * |H(f)|² this mode really applies: the analog filters' realisation at the source rate (it follows
-         * the analog models well below the source Nyquist frequency and falls faster near it), times the
-         * digitizer filter and exposure as realised for the rate.
-         */
+        /** |H(f)|² this mode applies: the analog models and exposure, the source-band edge, the digitizer FIR. */
         @Override
         public double powerGain(double frequencyHz, RateStep step) {
-            SecondOrderSections sos = realisedAt(step.sourceRate());
-            double m = sos == null ? 1.0 : sos.magnitude(frequencyHz);
-            if (!analogOnly) {
-                ModelledChannelResampler r = (ModelledChannelResampler) forRate(step);
-                double analogModel = 1;
-                for (AnalogFilter a : channel.analogFilters()) {
-                    analogModel *= a.magnitude(frequencyHz);
-                }
-                m *= analogModel > 0 ? r.magnitude(frequencyHz) / analogModel : 0.0;
-            }
+            double m = ((ModelledChannelResampler) forRate(step)).magnitude(frequencyHz);
             return m * m;
+        }
+
+        @Override
+        public SimulatorAccuracy accuracy(double sourceRate) {
+            ExactChainFilter f = exactAt(sourceRate);
+            double upTo = ExactChainFilter.EXACT_UP_TO_FRACTION * sourceRate;
+            return new SimulatorAccuracy(Double.NaN, upTo, Math.max(ExactChainFilter.TARGET_FLOOR_DB, f.accurateAboveDb()),
+                    String.format(java.util.Locale.ROOT, "the chain's response is applied within 0.1 dB wherever it lies "
+                            + "above %.0f dB, up to %.6g Hz (0.49 of the source rate), then sampled with an error below "
+                            + "-100 dB", Math.max(ExactChainFilter.TARGET_FLOOR_DB, f.accurateAboveDb()), upTo));
+        }
+
+        @Override
+        public List<SimulationWarning> warnings(double sourceRate) {
+            return exactAt(sourceRate).warnings();
         }
     }
 }

@@ -20,6 +20,7 @@ import org.foldbook.dsp.peaks.PeakFinder;
 import org.foldbook.dsp.peaks.SpectralPeak;
 import org.foldbook.dsp.resample.BareSampler;
 import org.foldbook.dsp.resample.KaiserPolyphaseResampler;
+import org.foldbook.dsp.resample.ModelledChannelResampler;
 import org.foldbook.dsp.resample.ResampleRun;
 import org.foldbook.dsp.resample.Resampler;
 import org.foldbook.dsp.spectrum.Welch;
@@ -102,7 +103,7 @@ public final class SweepEngine implements AutoCloseable {
         AtomicInteger done = new AtomicInteger();
 
         List<RateStep> order = new ArrayList<>(ladder.steps());
-        order.sort(Comparator.comparingLong((RateStep s) -> -s.outputLength(x.length)).thenComparingInt(RateStep::index));
+        order.sort(Comparator.comparingLong((RateStep s) -> -s.outputLength(source.length)).thenComparingInt(RateStep::index));
         RateResult[] results = new RateResult[total];
         List<Future<?>> futures = new ArrayList<>(total);
         for (RateStep step : order) {
@@ -134,7 +135,7 @@ public final class SweepEngine implements AutoCloseable {
             throw new IllegalStateException(c);
         }
         return new SweepResult(mode.name(), ref.sourceRate(), source.length, ref.binWidth(), ref.peaks(),
-                Arrays.asList(results), Optional.empty());
+                Arrays.asList(results), Optional.empty(), mode.accuracy(ref.sourceRate()), mode.warnings(ref.sourceRate()));
     }
 
     private static RateResult runRate(double[] x, RateStep step, Resampling mode, SpectrumSettings settings,
@@ -144,16 +145,18 @@ public final class SweepEngine implements AutoCloseable {
             throw new CancellationException("sweep cancelled");
         }
         double fs = step.effectiveRate();
-        long m = step.outputLength(x.length);
+        Resampler resampler = mode.forRate(step);
+        long m = resampler.outputLength(x.length);      // x may be a prepared series at another rate
         int seg = settings.segmentFor(m);
         Welch welch = welchBySegment.computeIfAbsent(seg, s -> Welch.builder(s).build());
         ws.welch.reset(welch, fs);
-        Resampler resampler = mode.forRate(step);
         RandomAccess direct = null;
         if (resampler instanceof BareSampler bare) {
             direct = bare::evaluate;
         } else if (resampler instanceof KaiserPolyphaseResampler poly) {
             direct = poly::evaluate;
+        } else if (resampler instanceof ModelledChannelResampler mc && mc.takesPrepared()) {
+            direct = mc::evaluate;
         }
         if (direct != null) {
             // random access straight from the shared array into the Welch buffer: no copy of input or output

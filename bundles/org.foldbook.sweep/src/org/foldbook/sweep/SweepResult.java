@@ -5,6 +5,8 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
 
+import org.foldbook.dsp.resample.SimulationWarning;
+
 /**
  * The outcome of a sweep over a rate ladder in one mode: the source peaks, what each rate shows, and the
  * summaries. Immutable; {@link #toJson()} and {@link #toCsv()} give the forms the command line and the UI
@@ -17,9 +19,12 @@ import java.util.Optional;
  * @param sources       source peaks in frequency order
  * @param rates         one result per ladder rate, in ladder order
  * @param band          the band summary, if a band was asked for
+ * @param accuracy      the band in which the mode simulates faithfully
+ * @param warnings      bands where the simulation cannot honour the modelled chain, and by how much
  */
 public record SweepResult(String mode, double sourceRate, long sourceSamples, double sourceBinWidth,
-        List<SourcePeak> sources, List<RateResult> rates, Optional<BandSummary> band) {
+        List<SourcePeak> sources, List<RateResult> rates, Optional<BandSummary> band, SimulatorAccuracy accuracy,
+        List<SimulationWarning> warnings) {
 
     /** Version of the JSON/CSV layout; raise it when a field changes meaning. */
     public static final int FORMAT_VERSION = 1;
@@ -27,13 +32,15 @@ public record SweepResult(String mode, double sourceRate, long sourceSamples, do
     public SweepResult {
         sources = List.copyOf(sources);
         rates = List.copyOf(rates);
+        warnings = List.copyOf(warnings);
+        java.util.Objects.requireNonNull(accuracy, "accuracy");
     }
 
     /** Computes the band summary for [low, high] and returns a result carrying it. */
     public SweepResult withBand(double low, double high) {
         BandSummary b = new BandSummary(low, high, Double.NaN);
         return new SweepResult(mode, sourceRate, sourceSamples, sourceBinWidth, sources, rates,
-                Optional.of(new BandSummary(low, high, lowestAliasFreeRate(b))));
+                Optional.of(new BandSummary(low, high, lowestAliasFreeRate(b))), accuracy, warnings);
     }
 
     /** Rates from highest to lowest (ladder order is kept in {@link #rates()}). */
@@ -105,6 +112,15 @@ public record SweepResult(String mode, double sourceRate, long sourceSamples, do
                     .endObject();
         }
         w.endArray().endObject();
+        w.name("accuracy").beginObject().member("upToHz", accuracy.upToHz())
+                .member("upToRateFraction", accuracy.upToNewRateFraction()).member("levelDb", accuracy.levelDb())
+                .member("statement", accuracy.statement()).endObject();
+        w.name("warnings").beginArray();
+        for (SimulationWarning sw : warnings) {
+            w.beginObject().member("fromHz", sw.fromHz()).member("toHz", sw.toHz())
+                    .member("uncertaintyDb", sw.uncertaintyDb()).member("text", sw.text()).endObject();
+        }
+        w.endArray();
         w.name("rates").beginArray();
         for (RateResult r : rates) {
             RateStep st = r.step();

@@ -20,6 +20,8 @@
  * <pre>
  * { "format", "version", "mode",
  *   "source": { "rate", "samples", "binWidth", "peaks": [ { "id", "frequency", "levelDb" } ] },
+ *   "accuracy": { "upToHz" or "upToRateFraction", "levelDb", "statement" },
+ *   "warnings": [ { "fromHz", "toHz", "uncertaintyDb" (null: content may be missing), "text" } ],
  *   "rates": [ { "index", "up", "down", "rate", "samples", "binWidth",
  *                "peaks":   [ { "frequency", "levelDb", "verdict", "sourcePeak" (id or null), "gainDb" } ],
  *                "sources": [ { "sourcePeak", "verdict", "apparentFrequency", "observedFrequency", "gainDb",

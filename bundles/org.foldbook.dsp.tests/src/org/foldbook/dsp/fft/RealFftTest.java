@@ -74,6 +74,41 @@ class RealFftTest {
         }
     }
 
+    @ParameterizedTest(name = "n = {0}")
+    @ValueSource(ints = {1, 2, 3, 4, 5, 8, 9, 16, 17, 100, 127, 211, 422, 1031, 4096})
+    @DisplayName("inverse: x[j] = (1/n) sum_k X[k] e^{+2 pi i jk/n} over all n bins, by the definition")
+    void inverseMatchesDefinition(int n) {
+        Random r = new Random(77 + n); // synthetic one-sided spectrum
+        int bins = n / 2 + 1;
+        double[] re = new double[bins];
+        double[] im = new double[bins];
+        for (int k = 0; k < bins; k++) {
+            re[k] = r.nextGaussian();
+            im[k] = (k == 0 || (n % 2 == 0 && k == n / 2)) ? 0 : r.nextGaussian();
+        }
+        double[] out = new double[n];
+        RealFft.of(n).inverseInPlace(re, im, out);
+        for (int j = 0; j < n; j++) {
+            double sum = 0;
+            for (int k = 0; k < n; k++) {
+                int kk = k <= n / 2 ? k : n - k;              // X[n-k] = conj(X[k])
+                double xr = re[kk];
+                double xi = k <= n / 2 ? im[kk] : -im[kk];
+                double a = 2 * Math.PI * (((long) j * k) % n) / n;
+                sum += xr * Math.cos(a) - xi * Math.sin(a);
+            }
+            assertEquals(sum / n, out[j], 1e-13 * Math.sqrt(n) + 1e-15, "sample " + j);
+        }
+        // and it undoes the forward transform
+        double[] x = randomSignal(n, 5 + n);
+        double[] work = x.clone();
+        RealFft.of(n).forwardInPlace(work, re, im);
+        RealFft.of(n).inverseInPlace(re, im, out);
+        for (int j = 0; j < n; j++) {
+            assertEquals(x[j], out[j], 1e-13 * Math.sqrt(n), "round trip " + j);
+        }
+    }
+
     @ParameterizedTest(name = "n = 2^{0}")
     @ValueSource(ints = {1, 2, 4, 8, 10, 12, 14, 16, 18})
     @DisplayName("powers of two equal Apache Commons Math FastFourierTransformer (STANDARD, FORWARD)")

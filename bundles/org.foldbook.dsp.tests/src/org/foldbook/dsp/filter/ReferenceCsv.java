@@ -16,16 +16,16 @@ import java.util.Map;
  * Reads the small CSV files written by releng/reference/filter_vectors.py (scipy.signal) from the
  * test class path: '#' lines are comments, the first other line names the columns.
  */
-final class ReferenceCsv {
+public final class ReferenceCsv {
 
-    final List<String> columns;
-    final List<String[]> rows = new ArrayList<>();
+    public final List<String> columns;
+    public final List<String[]> rows = new ArrayList<>();
 
     private ReferenceCsv(List<String> columns) {
         this.columns = columns;
     }
 
-    static ReferenceCsv load(String name) {
+    public static ReferenceCsv load(String name) {
         String path = "/reference/filters/" + name;
         try (InputStream in = ReferenceCsv.class.getResourceAsStream(path)) {
             if (in == null) {
@@ -50,7 +50,7 @@ final class ReferenceCsv {
         }
     }
 
-    String get(String[] row, String column) {
+    public String get(String[] row, String column) {
         int i = columns.indexOf(column);
         if (i < 0) {
             throw new IllegalArgumentException("no column " + column + " in " + columns);
@@ -58,12 +58,12 @@ final class ReferenceCsv {
         return row[i];
     }
 
-    double num(String[] row, String column) {
+    public double num(String[] row, String column) {
         return Double.parseDouble(get(row, column));
     }
 
     /** Rows grouped by the integer in column "case". */
-    Map<Integer, List<String[]>> byCase() {
+    public Map<Integer, List<String[]>> byCase() {
         Map<Integer, List<String[]>> m = new HashMap<>();
         for (String[] row : rows) {
             m.computeIfAbsent(Integer.parseInt(get(row, "case")), k -> new ArrayList<>()).add(row);
@@ -72,7 +72,7 @@ final class ReferenceCsv {
     }
 
     /** Builds the analog model a cases row describes (family, order, ripple_db, stopband_db, norm, cutoff_hz). */
-    AnalogFilter design(String[] row) {
+    public AnalogFilter design(String[] row) {
         String family = get(row, "family");
         int order = Integer.parseInt(get(row, "order"));
         double rp = num(row, "ripple_db");

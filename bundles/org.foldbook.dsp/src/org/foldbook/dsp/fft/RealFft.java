@@ -120,6 +120,36 @@ public final class RealFft {
     }
 
     /**
+     * Inverse of {@link #forwardInPlace}: {@code out[j] = (1/n) Σ_k X[k] exp(+2πi jk/n)} over all n bins, the
+     * upper half taken as {@code X[n-k] = conj(X[k])} from {@code re[k]}, {@code im[k]} (k = 0 .. n/2).
+     * {@code Im X[0]} and, for even n, {@code Im X[n/2]} are ignored (a real sequence has none). Allocates
+     * nothing except on the library's Bluestein path (see the class); {@code out} must be distinct from
+     * {@code re} and {@code im}.
+     */
+    public void inverseInPlace(double[] re, double[] im, double[] out) {
+        requireLength("re", re, bins());
+        requireLength("im", im, bins());
+        requireLength("out", out, n);
+        if (n == 1) {
+            out[0] = re[0];
+            return;
+        }
+        int half = n / 2;
+        out[0] = re[0];
+        for (int k = 1; k < half; k++) {
+            out[2 * k] = re[k];
+            out[2 * k + 1] = im[k];
+        }
+        if ((n & 1) == 0) {
+            out[1] = re[half];
+        } else {
+            out[n - 1] = re[half];
+            out[1] = im[half];
+        }
+        fft.realInverse(out, true);
+    }
+
+    /**
      * Zero-allocation power spectrum: {@code work[0..n)} holds the samples on entry and is overwritten;
      * {@code power[k] = |X[k]|^2} for {@code k = 0 .. n/2}, straight from the library's packed output.
      */

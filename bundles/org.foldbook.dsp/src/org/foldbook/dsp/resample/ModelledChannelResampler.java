@@ -1,82 +1,79 @@
 package org.foldbook.dsp.resample;
 
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
 import java.util.Objects;
 
 import org.foldbook.dsp.Check;
-import org.foldbook.dsp.filter.DigitalRealisation;
-import org.foldbook.dsp.filter.FrequencyResponse;
-import org.foldbook.dsp.filter.SecondOrderSections;
-import org.foldbook.dsp.filter.SosFilter;
 
 /**
- * Mode 2, "through the channel's own modelled filter": at the source rate fs0 the recording goes through
+ * Mode 2, "through the channel's own modelled filter":
  * <ol>
- * <li>the analog filters, realised by the filter package ({@link DigitalRealisation}: bilinear, pre-warped
- *     at each cutoff, second-order sections run block by block);</li>
- * <li>the digitizer's digital filter: a Kaiser low-pass FIR at fs0 ({@link KaiserLowPass}) with the
- *     data sheet's pass/stop edges times the new rate fs and its attenuation;</li>
- * <li>the camera exposure: the average over T·fs0 source samples centred on the frame instant, the
- *     two end samples weighted by the fraction of their sample interval inside the exposure;</li>
+ * <li>the analog filters and the camera exposure with their true response, magnitude and phase
+ *     ({@link ExactChainFilter}: frequency domain, output at 2·fs0, within 0.1 dB of the model wherever it
+ *     is above −120 dB over 0..0.49·fs0);</li>
+ * <li>the digitizer's digital filter: a Kaiser low-pass FIR ({@link KaiserLowPass}) at 2·fs0 with the
+ *     data sheet's pass/stop edges times the new rate fs and its attenuation — a design that meets the
+ *     mask, which is all a data sheet states;</li>
  * </ol>
- * then is sampled bare ({@link BareSampler}'s kernel) at t_m = m·down/up. Steps 2 and 3 are linear
- * and time-invariant like the interpolation, so they are folded into the sampler's phase table
- * (taps = FIR length + 31): only the kept instants are computed, never the filtered recording.
+ * then sampled bare ({@link BareSampler}'s kernel) at t_m = m·down/up source samples from the 2·fs0
+ * series, where the kernel is flat to far beyond the source band (0.49·fs0 is 0.245 of its rate). Step 2
+ * is linear and time-invariant like the interpolation, so it is folded into the sampler's phase table
+ * (taps = FIR length + 31): only the kept instants are computed.
  *
- * <p><b>Validity.</b> The model is only as good as the source rate's headroom above the filters:
- * <ul>
- * <li>the analog realisation follows the model closely only well below fs0/2 (see
- *     {@link DigitalRealisation}); {@link #analogFaithfulUpToHz(double)} gives the band where it stays
- *     within a tolerance. Content the real filter would pass near or above fs0/2 was never recorded;</li>
- * <li>a digitizer filter whose stop edge lies above fs0/2 is realised with its stop edge at fs0/2 (the
- *     source has nothing above it, but the transition is then steeper than the real one);</li>
- * <li>the exposure sum approximates the integral of the band-limited signal: its response is
- *     sin(πfT)/(πfT) within a relative (πf/fs0)²/3 (0.003 dB at 0.01·fs0, 0.07 dB at 0.05·fs0);</li>
- * <li>the sampler's own error (below −100 dB up to 0.39·fs0) and the edges (zero padding) as in mode 1.</li>
- * </ul>
- * Immutable and thread-safe; the analog filter state lives in each {@link ResampleRun}.
+ * <p>With {@link AnalogStage#ALREADY_APPLIED} the input is already {@link ExactChainFilter#apply}'s 2·fs0
+ * series (a sweep filters the recording once for all rates), so {@link #outputLength} counts 2·fs0 inputs.
+ * What cannot be honoured is stated in {@link #warnings()}. Immutable and thread-safe.
  */
 public final class ModelledChannelResampler implements Resampler {
 
-    /** Whether step 1 runs here or the caller has already filtered the recording (once for all rates). */
+    /** Whether step 1 runs here or the caller has already run {@link ExactChainFilter} (once for all rates). */
     public enum AnalogStage {
         RUN_HERE, ALREADY_APPLIED
     }
 
     private final RateRatio ratio;
+    private final RateRatio fromDoubled;          // the ratio against the 2·fs0 series
     private final double sourceRate;
     private final ModelledChannel channel;
-    private final SecondOrderSections analog;     // null: none or already applied
-    private final double[] fir;                   // combined digitizer FIR ∗ exposure, symmetric, odd length
+    private final ExactChainFilter exact;         // null: already applied
+    private final double[] fir;                   // digitizer FIR at 2·fs0, symmetric, odd length ({1}: none)
     private final KaiserLowPass digitizerFir;     // null: none
     private final boolean digitizerClamped;
-    private final PolyphaseKernel kernel;
+    private final PolyphaseKernel kernel;         // null: integer picking from the 2·fs0 series
+    private final List<SimulationWarning> warnings;
 
     private ModelledChannelResampler(RateRatio ratio, double sourceRate, ModelledChannel channel, AnalogStage stage) {
         this.ratio = Objects.requireNonNull(ratio, "ratio");
         this.sourceRate = Check.positive("sourceRate", sourceRate);
         this.channel = Objects.requireNonNull(channel, "channel");
         Objects.requireNonNull(stage, "stage");
-        this.analog = stage == AnalogStage.RUN_HERE && !channel.analogFilters().isEmpty()
-                ? DigitalRealisation.of(channel.analogFilters(), sourceRate) : null;
+        this.fromDoubled = RateRatio.of(ratio.up(), ExactChainFilter.FACTOR * ratio.down());
+        this.exact = stage == AnalogStage.RUN_HERE ? ExactChainFilter.of(channel, sourceRate) : null;
         double newRate = ratio.effectiveRate(sourceRate);
+        double rate2 = ExactChainFilter.FACTOR * sourceRate;
         double[] c = {1.0};
         KaiserLowPass dig = null;
         boolean clamped = false;
+        List<SimulationWarning> w = new ArrayList<>(exact == null ? List.of() : exact.warnings());
         ModelledChannel.DigitizerFilter df = channel.digitizerFilter();
-        if (df != null && df.passFraction() * newRate < sourceRate / 2) {
+        if (df != null && df.passFraction() * newRate < SourceBandTaper.END * sourceRate) {
             double stop = df.stopFraction() * newRate;
-            clamped = stop > sourceRate / 2;
-            dig = KaiserLowPass.design(sourceRate, df.passFraction() * newRate, Math.min(stop, sourceRate / 2),
-                    df.attenuationDb());
+            clamped = stop > rate2 / 2;
+            dig = KaiserLowPass.design(rate2, df.passFraction() * newRate, Math.min(stop, rate2 / 2), df.attenuationDb());
             c = dig.coefficientsShared();
+            if (clamped) {
+                w.add(new SimulationWarning(rate2 / 2, stop, Double.POSITIVE_INFINITY, String.format(Locale.ROOT,
+                        "the digitizer filter's stop edge %.6g Hz lies above the simulation's %.6g Hz: its transition "
+                                + "is realised steeper than stated", stop, rate2 / 2)));
+            }
         }
         this.digitizerFir = dig;
         this.digitizerClamped = clamped;
-        if (channel.exposureSeconds() > 0) {
-            c = convolve(c, exposureWeights(channel.exposureSeconds() * sourceRate));
-        }
         this.fir = c;
-        this.kernel = combinedKernel(ratio, c);
+        this.kernel = combinedKernel(fromDoubled, c);
+        this.warnings = List.copyOf(w);
     }
 
     /** Mode 2 for {@code ratio}, with every part of {@code channel} applied here. */
@@ -85,8 +82,8 @@ public final class ModelledChannelResampler implements Resampler {
     }
 
     /**
-     * Mode 2 for {@code ratio}; with {@link AnalogStage#ALREADY_APPLIED} the analog filters are left out
-     * (the caller ran them once over the recording, e.g. for a whole sweep) but still count in
+     * Mode 2 for {@code ratio}; with {@link AnalogStage#ALREADY_APPLIED} the input must be
+     * {@link ExactChainFilter#apply} of the recording (2·fs0), the analog filters and exposure still count in
      * {@link #magnitude}.
      */
     public static ModelledChannelResampler of(RateRatio ratio, double sourceRate, ModelledChannel channel,
@@ -95,43 +92,14 @@ public final class ModelledChannelResampler implements Resampler {
     }
 
     /**
-     * Box-car weights for an exposure of {@code len} source samples centred on sample 0: sample n stands
-     * for [n − ½, n + ½) and gets the overlap of that interval with [−len/2, len/2], divided by len.
-     */
-    static double[] exposureWeights(double len) {
-        Check.positive("exposure length in samples", len);
-        if (len > PolyphaseKernel.MAX_TABLE / 64) {
-            throw new IllegalArgumentException("exposure of " + len + " source samples is too long to simulate");
-        }
-        int half = (int) Math.ceil(len / 2 - 0.5);
-        double[] w = new double[2 * half + 1];
-        for (int n = -half; n <= half; n++) {
-            double lo = Math.max(n - 0.5, -len / 2);
-            double hi = Math.min(n + 0.5, len / 2);
-            w[n + half] = Math.max(0, hi - lo) / len;
-        }
-        return w;
-    }
-
-    static double[] convolve(double[] a, double[] b) {
-        double[] c = new double[a.length + b.length - 1];
-        for (int i = 0; i < a.length; i++) {
-            for (int j = 0; j < b.length; j++) {
-                c[i + j] += a[i] * b[j];
-            }
-        }
-        return c;
-    }
-
-    /**
-     * Phase table of "FIR c at the source rate, then the bare kernel": for output m with b = floor(t_m),
-     * f = frac(t_m), y = Σ_i x[b + i0 + i]·G_f[i], G_f[i] = Σ_j c[j]·h(i0 + i + j − C − f).
+     * Phase table of "FIR c at 2·fs0, then the bare kernel": for output m with b = floor(t_m), f = frac(t_m),
+     * y = Σ_i v[b + i0 + i]·G_f[i], G_f[i] = Σ_j c[j]·h(i0 + i + j − C − f); null for integer picking.
      */
     private static PolyphaseKernel combinedKernel(RateRatio ratio, double[] c) {
         int w = BareSampler.DEFAULT_HALF_WIDTH;
         KaiserSinc h = new KaiserSinc(w, BareSampler.DEFAULT_BETA);
         PolyphaseKernel bare = BareSampler.of(ratio).kernel();          // null for up = 1
-        if (c.length == 1 && bare != null) {
+        if (c.length == 1) {
             return bare;                                                 // nothing to fold in
         }
         int up = BareSampler.phaseCount(ratio);
@@ -140,7 +108,7 @@ public final class ModelledChannelResampler implements Resampler {
         int taps = 2 * w + c.length - 1;
         int offset = -w + 1 - centre;
         if ((long) up * taps > PolyphaseKernel.MAX_TABLE) {
-            throw new IllegalArgumentException("ratio " + ratio + " with a " + c.length + "-tap source-rate filter needs "
+            throw new IllegalArgumentException("ratio " + ratio + " with a " + c.length + "-tap digitizer filter needs "
                     + up + " x " + taps + " coefficients, more than " + PolyphaseKernel.MAX_TABLE);
         }
         double[] table = new double[up * taps];
@@ -172,6 +140,12 @@ public final class ModelledChannelResampler implements Resampler {
         return ratio;
     }
 
+    /** Outputs for {@code inputLength} inputs: source samples when run here, 2·fs0 samples when already applied. */
+    @Override
+    public long outputLength(long inputLength) {
+        return exact != null ? ratio.outputLength(inputLength) : fromDoubled.outputLength(inputLength);
+    }
+
     public double sourceRate() {
         return sourceRate;
     }
@@ -180,47 +154,40 @@ public final class ModelledChannelResampler implements Resampler {
         return channel;
     }
 
-    /** Taps per output: 32 for the bare kernel plus the source-rate FIR's length minus one. */
+    /** Taps per output at 2·fs0: 32 for the bare kernel plus the digitizer FIR's length minus one. */
     public int tapsPerOutput() {
-        return kernel.taps();
+        return kernel == null ? 1 : kernel.taps();
     }
 
-    /** True when the digitizer filter's stop edge was above fs0/2 and had to be moved down to it. */
+    /** True when the digitizer filter's stop edge was above fs0 (the 2·fs0 Nyquist) and had to be moved down. */
     public boolean digitizerFilterClamped() {
         return digitizerClamped;
     }
 
-    /**
-     * The band (Hz) up to which the analog filters' realisation at the source rate stays within
-     * {@code toleranceDb} of their models ({@link DigitalRealisation#faithfulUpToHz}); fs0/2 if there are none.
-     */
-    public double analogFaithfulUpToHz(double toleranceDb) {
-        if (channel.analogFilters().isEmpty()) {
-            return sourceRate / 2;
-        }
-        SecondOrderSections sos = analog != null ? analog : DigitalRealisation.of(channel.analogFilters(), sourceRate);
-        FrequencyResponse model = f -> {
-            double m = 1;
-            for (var a : channel.analogFilters()) {
-                m *= a.magnitude(f);
-            }
-            return m;
-        };
-        return DigitalRealisation.faithfulUpToHz(model, sos, toleranceDb);
+    /** True for {@link AnalogStage#ALREADY_APPLIED}: the input is {@link ExactChainFilter#apply}'s 2·fs0 series. */
+    public boolean takesPrepared() {
+        return exact == null;
+    }
+
+    /** Up to this frequency (0.49·fs0) the simulated chain is the modelled one (see {@link ExactChainFilter}). */
+    public double exactUpToHz() {
+        return ExactChainFilter.EXACT_UP_TO_FRACTION * sourceRate;
+    }
+
+    /** What this simulation cannot honour (the exact filter's limits when run here, the digitizer filter's). */
+    public List<SimulationWarning> warnings() {
+        return warnings;
     }
 
     /**
-     * |H(f)| that source content at {@code frequencyHz} gets before it is sampled: the analog models (not
-     * their realisation) times the realised digitizer FIR and exposure sum. The bare kernel's own roll-off
-     * above 0.39·fs0 is not included.
+     * |H(f)| that source content at {@code frequencyHz} gets before it is sampled: the analog models and the
+     * exposure's sinc, the source-band edge, and the realised digitizer FIR.
      */
     public double magnitude(double frequencyHz) {
         Check.finite("frequencyHz", frequencyHz);
-        double m = 1;
-        for (var a : channel.analogFilters()) {
-            m *= a.magnitude(frequencyHz);
-        }
-        return m * Math.abs(KaiserLowPass.amplitude(fir, frequencyHz / sourceRate));
+        double m = ExactChainFilter.chainResponse(channel, frequencyHz).abs()
+                * ExactChainFilter.sourceBandEdge(frequencyHz, sourceRate);
+        return m * Math.abs(KaiserLowPass.amplitude(fir, frequencyHz / (ExactChainFilter.FACTOR * sourceRate)));
     }
 
     /** |H(f)| of the realised digitizer FIR alone (1 when there is none). */
@@ -231,14 +198,14 @@ public final class ModelledChannelResampler implements Resampler {
     @Override
     public double[] apply(double[] samples) {
         Check.finiteSamples("samples", samples);
-        long total = ratio.outputLength(samples.length);
+        long total = outputLength(samples.length);
         if (total > Integer.MAX_VALUE - 8) {
             throw new IllegalArgumentException("samples: " + samples.length + " inputs give " + total
                     + " outputs, too many for one array; use start(sink)");
         }
         double[] out = new double[(int) total];
-        if (analog == null) {
-            kernel.evaluate(samples, samples.length, 0, out, 0, out.length);
+        if (exact == null) {
+            evaluate(samples, 0, out, 0, out.length);
             return out;
         }
         int[] pos = {0};
@@ -251,53 +218,62 @@ public final class ModelledChannelResampler implements Resampler {
         return out;
     }
 
-    @Override
-    public ResampleRun start(SampleSink sink) {
-        PolyphaseRun sampler = new PolyphaseRun(kernel, sink);
-        return analog == null ? sampler : new AnalogThenSample(analog.newFilter(), sampler);
+    /**
+     * Random access into the outputs from an {@link AnalogStage#ALREADY_APPLIED} 2·fs0 series (as
+     * {@link BareSampler#evaluate}); outputs {@code first .. first+count-1} go to {@code out[outOffset..]}.
+     */
+    public void evaluate(double[] doubled, long first, double[] out, int outOffset, int count) {
+        if (exact != null) {
+            throw new IllegalStateException("evaluate needs the 2·fs0 series of AnalogStage.ALREADY_APPLIED");
+        }
+        if (doubled == null) {
+            throw new IllegalArgumentException("doubled must not be null");
+        }
+        long total = fromDoubled.outputLength(doubled.length);
+        if (first < 0 || count < 0 || first > total - count) {
+            throw new IllegalArgumentException("output range " + first + " + " + count + " outside [0, " + total + ")");
+        }
+        Check.slice("out", out.length, outOffset, count);
+        if (kernel == null) {
+            long step = fromDoubled.down();
+            for (int i = 0; i < count; i++) {
+                out[outOffset + i] = doubled[(int) ((first + i) * step)];
+            }
+        } else {
+            kernel.evaluate(doubled, doubled.length, first, out, outOffset, count);
+        }
     }
 
-    /** Runs the analog filter's sections over each block (state carried across blocks), then the sampler. */
-    private static final class AnalogThenSample implements ResampleRun {
-        private static final int BLOCK = 1 << 13;
-        private final SosFilter filter;
-        private final ResampleRun sampler;
-        private final double[] buf = new double[BLOCK];
-        private long inputs;
+    @Override
+    public ResampleRun start(SampleSink sink) {
+        ResampleRun sampler = kernel == null ? new PickRun((int) fromDoubled.down(), sink) : new PolyphaseRun(kernel, sink);
+        return exact == null ? sampler : new ExactThenSample(exact, sampler);
+    }
 
-        AnalogThenSample(SosFilter filter, ResampleRun sampler) {
-            this.filter = filter;
+    /** The exact filter's 2·fs0 outputs streamed straight into the sampler. */
+    private static final class ExactThenSample implements ResampleRun {
+        private final ResampleRun filter;
+        private final ResampleRun sampler;
+
+        ExactThenSample(ExactChainFilter exact, ResampleRun sampler) {
             this.sampler = sampler;
+            this.filter = exact.start(sampler::push);
         }
 
         @Override
         public void push(double[] samples, int offset, int length) {
-            if (samples == null) {
-                throw new IllegalArgumentException("samples must not be null");
-            }
-            Check.slice("samples", samples.length, offset, length);
-            for (int i = offset, e = offset + length; i < e; i++) {
-                if (!Double.isFinite(samples[i])) {
-                    throw new IllegalArgumentException("samples: input sample " + (inputs + i - offset)
-                            + " must be finite, was " + samples[i]);
-                }
-            }
-            for (int done = 0; done < length; done += BLOCK) {
-                int c = Math.min(BLOCK, length - done);
-                filter.filter(samples, offset + done, buf, 0, c);
-                sampler.push(buf, 0, c);
-            }
-            inputs += length;
+            filter.push(samples, offset, length);
         }
 
         @Override
         public void finish() {
+            filter.finish();
             sampler.finish();
         }
 
         @Override
         public long inputCount() {
-            return inputs;
+            return filter.inputCount();
         }
 
         @Override

@@ -10,9 +10,11 @@
  *     (W = 16, β = 10) evaluated at t_m = m·down/up; integer ratios pick samples. Error ≤ −100 dB re a
  *     tone up to 0.39·fs0 (tests: ≤ −100 asserted against exact sin(); the peer measured ≤ −108 dB).</li>
  * <li>Mode 2, {@link org.foldbook.dsp.resample.ModelledChannelResampler} over a
- *     {@link org.foldbook.dsp.resample.ModelledChannel}: the analog filters (filter package's
- *     realisation), a digitizer's digital filter and a camera exposure at the source rate, then mode 1.
- *     Valid only as far as the source rate's headroom above the filters allows (see the class).</li>
+ *     {@link org.foldbook.dsp.resample.ModelledChannel}: the analog filters and a camera exposure with
+ *     their true response ({@link org.foldbook.dsp.resample.ExactChainFilter}: frequency domain, overlap-save,
+ *     output at 2·fs0, within 0.1 dB above −120 dB over 0..0.49·fs0), a digitizer's digital filter, then the
+ *     mode 1 kernel on the 2·fs0 series. What the source rate cannot honour comes as
+ *     {@link org.foldbook.dsp.resample.SimulationWarning}s.</li>
  * <li>Mode 3, {@link org.foldbook.dsp.resample.IdealDecimator}: multi-stage Kaiser polyphase, pass band
  *     to 0.45·fs within 0.001 dB, ≥ 100 dB from fs/2, zero delay.</li>
  * <li>{@link org.foldbook.dsp.resample.KaiserPolyphaseResampler#resamplePolyDefaults}: the filter of
@@ -33,7 +35,8 @@
  * <p>Cost, multiply-adds: mode 1 32 per output; resample_poly ≈ 20 per input sample at any ratio;
  * mode 3 about 27 per input sample for strong decimation, ≈ 133 per input sample for ratios in [1/2, 1)
  * (one sharp stage: a 5 % transition at ≥ 100 dB is that long); mode 2 the FIR's length + 31 per
- * output. The inner loops are plain Java (no incubator vector API): fixed 32-tap loops, several
+ * output at 2·fs0, plus the exact filter's overlap-save (two FFTs of about four kernel lengths per block,
+ * once per recording). The inner loops are plain Java (no incubator vector API): fixed 32-tap loops, several
  * independent sums, and for mode 1 four outputs of one phase per pass so each coefficient is loaded
  * once for four outputs.
  */

@@ -42,7 +42,7 @@ public class SweepBenchmark {
     @Param({"1000000"})
     public int samples;
 
-    @Param({"bare", "peer-poly", "ideal", "modelled"})
+    @Param({"bare", "polyphase-default", "ideal", "modelled"})
     public String mode;
 
     @Param({"1", "2"})
@@ -61,7 +61,7 @@ public class SweepBenchmark {
         ladder = RateLadder.geometric(FS0, FS0, 2000, 100, 1000);
         resampling = switch (mode) {
             case "bare" -> Resampling.bare();
-            case "peer-poly" -> Resampling.peerResamplePoly();
+            case "polyphase-default" -> Resampling.polyphaseDefault();
             case "ideal" -> Resampling.idealDecimator();
             case "modelled" -> Resampling.modelledFilter(org.foldbook.dsp.filter.AnalogLowPass.butterworth(4, 20_000));
             default -> throw new IllegalArgumentException(mode);
