@@ -12,7 +12,9 @@ import org.foldbook.dsp.resample.IdealDecimator;
 import org.foldbook.dsp.resample.KaiserPolyphaseResampler;
 import org.foldbook.dsp.resample.ModelledChannel;
 import org.foldbook.dsp.resample.ModelledChannelResampler;
+import org.foldbook.dsp.resample.ResampleRun;
 import org.foldbook.dsp.resample.Resampler;
+import org.foldbook.dsp.resample.SampleSink;
 import org.foldbook.dsp.resample.SimulationWarning;
 
 /**
@@ -33,6 +35,23 @@ public interface Resampling {
      */
     default double[] prepare(double[] source, double sourceRate) {
         return source;
+    }
+
+    /**
+     * {@link #prepare} block by block, for the streaming sweep; null when {@code prepare} returns the source
+     * itself. A mode that overrides {@code prepare} overrides this too, so that both give the same series.
+     */
+    default Preparation blockPrepare(double sourceRate) {
+        return null;
+    }
+
+    /** The once-per-sweep work of a mode as a stream: consecutive source blocks in, the prepared series out. */
+    interface Preparation {
+        /** Length of the prepared series of {@code sourceLength} source samples. */
+        long outputLength(long sourceLength);
+
+        /** A pass whose prepared samples go to {@code sink} as they are complete. */
+        ResampleRun start(SampleSink sink);
     }
 
     /** The re-sampler for one rate (designed here, so its cost counts as part of the sweep). */
@@ -256,6 +275,23 @@ public interface Resampling {
         @Override
         public double[] prepare(double[] source, double sourceRate) {
             return exactAt(sourceRate).apply(source);
+        }
+
+        /** {@link #prepare} as a stream: the same overlap-save pass, fed block by block. */
+        @Override
+        public Preparation blockPrepare(double sourceRate) {
+            ExactChainFilter f = exactAt(sourceRate);
+            return new Preparation() {
+                @Override
+                public long outputLength(long sourceLength) {
+                    return ExactChainFilter.FACTOR * sourceLength;
+                }
+
+                @Override
+                public ResampleRun start(SampleSink sink) {
+                    return f.start(sink);
+                }
+            };
         }
 
         /** Samples {@link #prepare}'s 2·fs0 series (so its {@code outputLength} counts 2·fs0 inputs). */

@@ -41,9 +41,12 @@ public final class SourceSpectrum {
         Check.finiteSamples("source", source);
         Check.positive("sourceRate", sourceRate);
         int seg = settings.segmentFor(source.length);
-        Welch welch = Welch.builder(seg).build();
-        double[] p = new double[welch.bins()];
-        welch.psdInto(source, 0, source.length, sourceRate, new Welch.Workspace(seg), p);
+        // through the same accumulator as the streaming sweep, so both give this PSD to the last bit
+        StreamingWelch acc = new StreamingWelch(seg);
+        acc.reset(Welch.builder(seg).build(), sourceRate);
+        acc.accept(source, 0, source.length);
+        double[] p = new double[seg / 2 + 1];
+        acc.finish(p);
         return fromPsd(p, sourceRate, source.length, seg, settings);
     }
 
