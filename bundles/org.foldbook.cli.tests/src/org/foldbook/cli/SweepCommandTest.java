@@ -113,6 +113,39 @@ class SweepCommandTest {
     }
 
     @Test
+    @DisplayName("--stream: the same JSON as the in-memory sweep, WAV (javax.sound writer) and raw float64, "
+            + "bare and modelled")
+    void streamingGivesTheSameJson() throws IOException {
+        Path wav = dir.resolve("long.wav");
+        double[] x = sine(200_000, 48_000, 7_300, 0.4);
+        writeWav(wav, x, 48_000f);
+        ByteBuffer b = ByteBuffer.allocate(8 * x.length).order(ByteOrder.LITTLE_ENDIAN);
+        for (double v : x) {
+            b.putDouble(v);
+        }
+        Path raw = dir.resolve("long.f64");
+        Files.write(raw, b.array());
+        for (String[] input : new String[][] {{"--input", wav.toString()}, {"--input", raw.toString(), "--rate", "48000"}}) {
+            for (String[] mode : new String[][] {{"--mode", "bare"}, {"--mode", "modelled", "--filter", "butterworth:4:9000"}}) {
+                java.util.List<String> args = new java.util.ArrayList<>(java.util.List.of("sweep", "--to", "6000",
+                        "--steps", "7", "--quiet"));
+                args.addAll(java.util.List.of(input));
+                args.addAll(java.util.List.of(mode));
+                Run inMemory = run(args.toArray(String[]::new));
+                args.add("--stream");
+                Run streamed = run(args.toArray(String[]::new));
+                assertEquals(0, inMemory.code(), inMemory.err());
+                assertEquals(0, streamed.code(), streamed.err());
+                assertTrue(inMemory.out().contains("\"rates\""), inMemory.out());
+                assertEquals(inMemory.out(), streamed.out(), String.join(" ", args));
+            }
+        }
+        Run r = run("sweep", "--input", wav.toString(), "--to", "6000", "--steps", "3", "--mode", "preview", "--stream");
+        assertEquals(Main.BAD_INPUT, r.code(), r.err());
+        assertTrue(r.err().contains("--stream"), r.err());
+    }
+
+    @Test
     @DisplayName("raw float64 + a grid file of 'index up down fs' lines; CSV output to a file")
     void rawAndGridFile() throws IOException {
         double[] x = sine(1 << 15, 8000, 3000, 1.0);

@@ -14,12 +14,13 @@ import org.foldbook.io.SampleType;
 import org.foldbook.io.raw.RawLayout;
 import org.foldbook.io.raw.RawReader;
 import org.foldbook.io.wav.WavReader;
+import org.foldbook.sweep.StreamingSweep;
 
 /**
- * Reads one channel of a recording into memory for the sweep: WAV (RIFF/RF64, by the io bundle's reader),
- * or raw little-endian float64 when a rate is given and the file is not RIFF. The sweep needs the whole
- * channel at once (rates run in parallel over one shared array); other channels are read block by block and
- * dropped.
+ * Reads one channel of a recording for the sweep: WAV (RIFF/RF64, by the io bundle's reader), or raw
+ * little-endian float64 when a rate is given and the file is not RIFF. Either into memory (the in-memory
+ * engine shares one array between its threads) or, for {@code --stream}, as a block source over the
+ * reader's bounded buffer. Other channels are read block by block and dropped.
  */
 final class RecordingLoader {
     private static final int BLOCK = 1 << 16;
@@ -31,38 +32,111 @@ final class RecordingLoader {
     private RecordingLoader() {
     }
 
-    static Loaded load(Path file, Optional<Double> rawRate, int channel) throws IOException {
+    /**
+     * One channel as a {@link StreamingSweep.Source}: the reader's bounded buffer, nothing of the file's
+     * size in memory. Close it when done.
+     */
+    static Streamed stream(Path file, Optional<Double> rawRate, int channel) throws IOException {
+        RecordingReader r = open(file, rawRate);
+        try {
+            RecordingInfo info = checked(r, file, rawRate, channel);
+            if (info.frameCount() == 0) {
+                throw new IllegalArgumentException("--input " + file + ": no samples");
+            }
+            return new Streamed(r, info, channel - 1);
+        } catch (RuntimeException | IOException e) {
+            r.close();
+            throw e;
+        }
+    }
+
+    /** A channel read block by block; the other channels' samples pass through a scratch buffer. */
+    static final class Streamed implements StreamingSweep.Source, AutoCloseable {
+        private final RecordingReader reader;
+        private final RecordingInfo info;
+        private final int channel;
+        private final double[][] scratch;
+
+        Streamed(RecordingReader reader, RecordingInfo info, int channel) {
+            this.reader = reader;
+            this.info = info;
+            this.channel = channel;
+            this.scratch = new double[info.channelCount()][];
+        }
+
+        double rate() {
+            return info.sampleRate();
+        }
+
+        @Override
+        public long length() {
+            return info.frameCount();
+        }
+
+        @Override
+        public int read(double[] buf, int offset, int max) throws IOException {
+            if (scratch.length == 1) {
+                scratch[0] = buf;
+                return reader.read(scratch, offset, max);
+            }
+            if (scratch[0] == null) {
+                for (int c = 0; c < scratch.length; c++) {
+                    scratch[c] = new double[BLOCK];
+                }
+            }
+            int got = reader.read(scratch, 0, Math.min(max, BLOCK));
+            if (got > 0) {
+                System.arraycopy(scratch[channel], 0, buf, offset, got);
+            }
+            return got;
+        }
+
+        @Override
+        public void close() throws IOException {
+            reader.close();
+        }
+    }
+
+    /** Opens the file with the reader its first bytes call for. */
+    private static RecordingReader open(Path file, Optional<Double> rawRate) throws IOException {
         if (!Files.isRegularFile(file)) {
             throw new IllegalArgumentException("--input " + file + ": no such file");
         }
-        boolean riff = isRiff(file);
-        RecordingReader reader;
-        String format;
-        if (riff) {
-            reader = WavReader.open(file, ReadOptions.DEFAULT.withSha256(false));
-            format = "wav";
-        } else if (rawRate.isPresent()) {
-            RawLayout layout = RawLayout.of(SampleType.FLOAT64, ByteOrder.LITTLE_ENDIAN, 1, true, 0, rawRate.get());
-            reader = RawReader.open(file, layout, ReadOptions.DEFAULT.withSha256(false));
-            format = "raw-f64le";
-        } else {
-            throw new IllegalArgumentException("--input " + file
-                    + ": not a WAV file; for raw little-endian float64 samples give --rate");
+        if (isRiff(file)) {
+            return WavReader.open(file, ReadOptions.DEFAULT.withSha256(false));
         }
+        if (rawRate.isPresent()) {
+            RawLayout layout = RawLayout.of(SampleType.FLOAT64, ByteOrder.LITTLE_ENDIAN, 1, true, 0, rawRate.get());
+            return RawReader.open(file, layout, ReadOptions.DEFAULT.withSha256(false));
+        }
+        throw new IllegalArgumentException("--input " + file
+                + ": not a WAV file; for raw little-endian float64 samples give --rate");
+    }
+
+    /** The header's facts, checked against --rate and --channel. */
+    private static RecordingInfo checked(RecordingReader r, Path file, Optional<Double> rawRate, int channel)
+            throws IOException {
+        RecordingInfo info = r.info();
+        if (isRiff(file) && rawRate.isPresent() && rawRate.get() != info.sampleRate()) {
+            throw new IllegalArgumentException("--rate " + rawRate.get() + " disagrees with the WAV header's "
+                    + info.sampleRate() + " S/s in " + file);
+        }
+        if (channel > info.channelCount()) {
+            throw new IllegalArgumentException("--channel " + channel + ": " + file + " has " + info.channelCount()
+                    + " channel(s)");
+        }
+        return info;
+    }
+
+    static Loaded load(Path file, Optional<Double> rawRate, int channel) throws IOException {
+        RecordingReader reader = open(file, rawRate);
+        String format = isRiff(file) ? "wav" : "raw-f64le";
         try (RecordingReader r = reader) {
-            RecordingInfo info = r.info();
-            if (riff && rawRate.isPresent() && rawRate.get() != info.sampleRate()) {
-                throw new IllegalArgumentException("--rate " + rawRate.get() + " disagrees with the WAV header's "
-                        + info.sampleRate() + " S/s in " + file);
-            }
+            RecordingInfo info = checked(r, file, rawRate, channel);
             int channels = info.channelCount();
-            if (channel > channels) {
-                throw new IllegalArgumentException("--channel " + channel + ": " + file + " has " + channels
-                        + " channel(s)");
-            }
             if (info.frameCount() > Integer.MAX_VALUE - 8) {
                 throw new IllegalArgumentException("--input " + file + ": " + info.frameCount()
-                        + " frames, more than one array holds");
+                        + " frames, more than one array holds; use --stream");
             }
             int n = (int) info.frameCount();
             double[] x = new double[n];

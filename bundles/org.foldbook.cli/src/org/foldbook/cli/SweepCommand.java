@@ -18,6 +18,7 @@ import org.foldbook.sweep.RateResult;
 import org.foldbook.sweep.Resampling;
 import org.foldbook.sweep.SourceSpectrum;
 import org.foldbook.sweep.SpectrumSettings;
+import org.foldbook.sweep.StreamingSweep;
 import org.foldbook.sweep.SweepEngine;
 import org.foldbook.sweep.SweepProgress;
 import org.foldbook.sweep.SweepResult;
@@ -36,9 +37,16 @@ final class SweepCommand {
         }
         try {
             SweepOptions o = SweepOptions.parse(args);
-            RecordingLoader.Loaded rec = RecordingLoader.load(o.input(), o.rate(), o.channel());
-            RateLadder ladder = ladder(o, rec.rate());
-            SweepResult result = sweep(o, rec, ladder, err);
+            SweepResult result;
+            if (o.stream()) {
+                try (RecordingLoader.Streamed rec = RecordingLoader.stream(o.input(), o.rate(), o.channel());
+                        StreamingSweep engine = new StreamingSweep(o.threads())) {
+                    result = engine.run(rec, ladder(o, rec.rate()), mode(o), SpectrumSettings.DEFAULT, progress(o, err));
+                }
+            } else {
+                RecordingLoader.Loaded rec = RecordingLoader.load(o.input(), o.rate(), o.channel());
+                result = sweep(o, rec, ladder(o, rec.rate()), err);
+            }
             if (!Double.isNaN(o.bandLow())) {
                 result = result.withBand(o.bandLow(), o.bandHigh());
             }
@@ -150,15 +158,18 @@ final class SweepCommand {
         if (o.mode().equals("preview")) {
             return new FoldPreview(ref).preview(ladder, mode);
         }
-        SweepProgress progress = o.quiet() ? SweepProgress.NONE : new SweepProgress() {
+        try (SweepEngine engine = new SweepEngine(o.threads())) {
+            return engine.run(rec.samples(), ref, ladder, mode, progress(o, err));
+        }
+    }
+
+    private static SweepProgress progress(SweepOptions o, PrintStream err) {
+        return o.quiet() ? SweepProgress.NONE : new SweepProgress() {
             @Override
             public synchronized void rateDone(RateResult r, int done, int total) {
                 err.printf("rate %d/%d done: %.6g S/s, %d peaks%n", done, total, r.step().effectiveRate(),
                         r.observed().size());
             }
         };
-        try (SweepEngine engine = new SweepEngine(o.threads())) {
-            return engine.run(rec.samples(), ref, ladder, mode, progress);
-        }
     }
 }
