@@ -55,14 +55,14 @@ class GearboxDemoTest {
     }
 
     @Test
-    @DisplayName("the notebook file loads back with its rig, four chains, two experiments, four channels")
+    @DisplayName("the notebook file loads back with its rig, five chains, three experiments, five channels")
     void loadsBack() {
         assertEquals(folder.toAbsolutePath().normalize().resolve("gearbox-stand.foldbook"), file);
         assertEquals(1, notebook.getRigs().size());
-        assertEquals(List.of("CH-HZ", "CH-BZ", "CH-MIC", "CH-CAM"),
+        assertEquals(List.of("CH-HZ", "CH-BZ", "CH-MIC", "CH-CAM", "CH-SURVEY"),
                 notebook.getRigs().get(0).getChains().stream().map(SignalChain::getId).toList());
-        assertEquals(2, notebook.getExperiments().size());
-        assertEquals(4, notebook.getExperiments().stream().mapToInt(e -> e.getChannels().size()).sum());
+        assertEquals(3, notebook.getExperiments().size());
+        assertEquals(5, notebook.getExperiments().stream().mapToInt(e -> e.getChannels().size()).sum());
         for (Experiment e : notebook.getExperiments()) {
             for (Channel c : e.getChannels()) {
                 assertTrue(c.getChain() != null && !c.getChain().eIsProxy(), c.getName() + ": chain resolves");
@@ -149,7 +149,7 @@ class GearboxDemoTest {
     @DisplayName("every logged size and SHA-256 matches its file; a changed byte is found")
     void checksumsMatchTheFiles() throws Exception {
         List<Recording> recordings = recordings(notebook);
-        assertEquals(3, recordings.size());
+        assertEquals(4, recordings.size());
         for (Recording r : recordings) {
             Path data = RecordingFiles.resolve(r);
             byte[] bytes = Files.readAllBytes(data);
@@ -361,5 +361,23 @@ class GearboxDemoTest {
             into.add(child);
             collect(child, into);
         }
+    }
+
+    @Test
+    @DisplayName("survey: where its components land at the everyday 25.6 kS/s, and what LP-A takes off them")
+    void surveyScenarioFigures() {
+        // fold formula |f − k·fs|, k = round(f/fs) (Oppenheim & Schafer ch. 4), worked by hand
+        assertEquals(3500, org.foldbook.dsp.fold.Folding.apparentHz(SurveyScenario.BEARING_HZ, 25600), 1e-9);
+        assertEquals(8800, org.foldbook.dsp.fold.Folding.apparentHz(SurveyScenario.INVERTER_HZ, 25600), 1e-9);
+        assertEquals(2 * GearboxDemo.MESH_HZ, org.foldbook.dsp.fold.Folding.apparentHz(SurveyScenario.MERGING_HZ, 25600), 1e-9);
+        assertEquals(6400, org.foldbook.dsp.fold.Folding.apparentHz(GearboxDemo.RESONANCE_HZ, 25600), 1e-9);
+        // LP-A (Butterworth 4 at 10 kHz): 10·log10(1 + (f/fc)^8), the closed form
+        SignalChain everyday = notebook.getRigs().get(0).getChains().get(0);
+        org.foldbook.dsp.filter.FrequencyResponse lpA = ChainFigures.chainResponse(everyday);
+        assertEquals(27.6, lpA.attenuationDb(SurveyScenario.BEARING_HZ), 0.05);
+        assertEquals(62.3, lpA.attenuationDb(SurveyScenario.INVERTER_HZ), 0.05);
+        org.foldbook.model.Channel survey = notebook.getExperiments().get(2).getChannels().get(0);
+        assertEquals(everyday, survey.getSweepPlan().getThroughChain());
+        assertEquals(204800, survey.getRecording().getDeclaredRateHz(), 0);
     }
 }

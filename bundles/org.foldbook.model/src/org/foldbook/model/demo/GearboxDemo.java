@@ -45,7 +45,9 @@ import org.foldbook.model.persistence.RecordingFiles;
  * <li>a microphone (to 20 kHz) into a delta-sigma digitizer at 48 kS/s whose built-in digital
  * filter (100 dB from 0.547·fs) protects it: nothing the microphone passes folds;</li>
  * <li>a high-speed camera at 1000 frames/s watching a painted mark on the output shaft (0.8 ms
- * exposure of a 1 ms frame period).</li>
+ * exposure of a 1 ms frame period);</li>
+ * <li>the housing accelerometer recorded wide-band at 204.8 kS/s for a survey ({@link SurveyScenario}),
+ * whose channel carries a sweep plan through the everyday chain 1.</li>
  * </ol>
  * Signals are tones of the shaft (24.5 Hz at 1470 rpm), the 37-tooth mesh (906.5 Hz) and its
  * harmonics, the accelerometers' resonance ringing at 32 kHz and an ultrasonic 30 kHz component at the
@@ -62,7 +64,11 @@ public final class GearboxDemo {
     static final double SHAFT_HZ = 1470.0 / 60.0; // 24.5 Hz
     static final int PINION_TEETH = 37;
     static final double MESH_HZ = SHAFT_HZ * PINION_TEETH; // 906.5 Hz
+    /** The mesh frequency, for tests outside this package. */
+    public static final double MESH_HZ_FOR_TESTS = MESH_HZ;
     static final double RESONANCE_HZ = 32000.0;
+    /** Quality factor of the accelerometers' mounted resonance (the scenario's value: a peak of about 28 dB). */
+    static final double RESONANCE_Q = 25.0;
     static final double VIBRATION_RATE_HZ = 25600.0;
     static final double SOUND_RATE_HZ = 48000.0;
     static final double FRAME_RATE_HZ = 1000.0;
@@ -233,6 +239,7 @@ public final class GearboxDemo {
         strobe.getChannels().add(channel("mark brightness", shaftCamera, mark, 0, "brightness", "1"));
 
         notebook.getExperiments().addAll(List.of(run, strobe));
+        SurveyScenario.addTo(notebook, rig, accHousing, charge, housing);
         return notebook;
     }
 
@@ -243,7 +250,8 @@ public final class GearboxDemo {
 
     /** The recording's channels (full-scale fractions), each rendered through its channel's chain. */
     static double[][] signalsOf(Experiment experiment, Recording recording) {
-        int frames = (int) Math.round(SECONDS * recording.getDeclaredRateHz());
+        double seconds = SurveyScenario.RECORDING_ID.equals(recording.getId()) ? SurveyScenario.SECONDS : SECONDS;
+        int frames = (int) Math.round(seconds * recording.getDeclaredRateHz());
         double[][] out = new double[recording.getChannelCount()][];
         for (Channel channel : experiment.getChannels()) {
             if (channel.getRecording() == recording) {
@@ -281,6 +289,7 @@ public final class GearboxDemo {
                 tones.add(new Tone(3 * MESH_HZ, 0.03, 0.2));
                 tones.add(new Tone(30000.0, 0.10, 0.9)); // ultrasonic hiss of the drive's inverter
             }
+            case SurveyScenario.CHAIN_ID -> tones.addAll(List.of(SurveyScenario.tones()));
             case "CH-CAM" -> {
                 for (int k = 1; k <= 12; k++) { // a narrow bright mark: a pulse train at the shaft rate
                     tones.add(new Tone(k * SHAFT_HZ, 0.5 / k, 0.0));
@@ -300,6 +309,7 @@ public final class GearboxDemo {
             case "CH-HZ" -> 20260414L;
             case "CH-BZ" -> 20260415L;
             case "CH-MIC" -> 20260416L;
+            case SurveyScenario.CHAIN_ID -> 20260418L;
             default -> 20260417L;
         };
     }
@@ -316,6 +326,7 @@ public final class GearboxDemo {
         s.setUsableMinHz(1.0);
         s.setUsableMaxHz(20000.0);
         s.setResonanceHz(RESONANCE_HZ);
+        s.setResonanceQ(RESONANCE_Q);
         s.setCalibrationDate(day(2026, 1, 12));
         s.setNotes("stud mounted on a spot-faced pad");
         return s;
@@ -382,7 +393,7 @@ public final class GearboxDemo {
         return c;
     }
 
-    private static Date day(int year, int month, int dayOfMonth) {
+    static Date day(int year, int month, int dayOfMonth) {
         return Date.from(LocalDate.of(year, month, dayOfMonth).atStartOfDay(ZoneOffset.UTC).toInstant());
     }
 }
