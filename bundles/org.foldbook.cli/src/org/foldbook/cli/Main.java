@@ -25,14 +25,17 @@ public final class Main {
     static int run(String[] args, PrintStream out, PrintStream err) {
         if (args.length == 0 || args[0].equals("-h") || args[0].equals("--help")) {
             err.println("usage: foldbook <command> [options]\ncommands:\n  sweep   stepped-rate simulation of a "
-                    + "recording, per-rate peaks and verdicts as JSON\nrun 'sweep --help' for its options");
+                    + "recording or a notebook channel, per-rate peaks and verdicts as JSON\n"
+                    + "  demo    write the demo notebook and its recordings into a folder\n"
+                    + "run 'foldbook <command> --help' for its options");
             return args.length == 0 ? BAD_INPUT : OK;
         }
         String[] rest = Arrays.copyOfRange(args, 1, args.length);
         return switch (args[0]) {
             case "sweep" -> SweepCommand.run(rest, out, err);
+            case "demo" -> DemoCommand.run(rest, out, err);
             default -> {
-                err.println("foldbook: unknown command '" + args[0] + "' (known: sweep)");
+                err.println("foldbook: unknown command '" + args[0] + "' (known: sweep, demo)");
                 yield BAD_INPUT;
             }
         };

@@ -32,8 +32,12 @@ final class SweepCommand {
         for (String a : args) {
             if (a.equals("-h") || a.equals("--help")) {
                 err.print(SweepOptions.USAGE);
+                err.print(NotebookSweep.USAGE);
                 return Main.OK;
             }
+        }
+        if (NotebookSweep.wanted(args)) {
+            return NotebookSweep.run(args, out, err);
         }
         try {
             SweepOptions o = SweepOptions.parse(args);

@@ -85,10 +85,11 @@ class NotebookPartTest {
         assertEquals(1, tree.getItemCount());
         TreeItem root = tree.getItem(0);
         assertEquals(document.notebook().getTitle(), root.getText(0));
-        assertEquals(List.of("Inventory (9)", "Rigs (1)", "Experiments (2)"), texts(root.getItems()));
+        assertEquals(List.of("Inventory (10)", "Rigs (1)", "Experiments (3)"), texts(root.getItems()));
         TreeItem rig = root.getItem(1).getItem(0);
         assertEquals("gearbox stand GB-2", rig.getText(0));
-        assertEquals(List.of("housing Z, filtered", "bearing Z, filter bypassed", "sound at 0.5 m", "shaft mark camera"),
+        assertEquals(List.of("housing Z, filtered", "bearing Z, filter bypassed", "sound at 0.5 m", "shaft mark camera",
+                "housing Z, wide-band survey"),
                 texts(rig.getItems()));
         // Nyquist of the vibration chains: 25.6 kS/s / 2 = 12.8 kHz
         assertEquals("Nyquist 12.8 kHz, 4 stages", rig.getItem(0).getText(1));
