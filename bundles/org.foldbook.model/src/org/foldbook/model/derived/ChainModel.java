@@ -10,7 +10,7 @@ import org.foldbook.dsp.filter.Cascade;
 import org.foldbook.dsp.filter.DigitizerDigitalFilter;
 import org.foldbook.dsp.filter.ExposureBoxcar;
 import org.foldbook.dsp.filter.FrequencyResponse;
-import org.foldbook.dsp.filter.FrontEndFilters;
+import org.foldbook.dsp.filter.SensorAndConditioner;
 import org.foldbook.dsp.resample.ModelledChannel;
 import org.foldbook.model.Amplifier;
 import org.foldbook.model.AntiAliasFilter;
@@ -86,8 +86,8 @@ public record ChainModel(String chainId, Sampler sampler, double samplingRateHz,
         if (sensorStage != null) {
             Sensor sensor = (Sensor) sensorStage.getDevice();
             if (sensor.getResonanceHz() != null && sensor.getResonanceHz() > 0) {
-                if (sensor.getResonanceQ() != null && sensor.getResonanceQ() > 0.5) {
-                    resonance = Optional.of(FrontEndFilters.resonance(sensor.getResonanceHz(), sensor.getResonanceQ()));
+                if (sensor.getResonanceQ() != null && sensor.getResonanceQ() > 0) {
+                    resonance = Optional.of(SensorAndConditioner.sensorResonance(sensor.getResonanceHz(), sensor.getResonanceQ()));
                 } else {
                     notes.add("sensor " + sensor.getId() + ": resonance at " + hz(sensor.getResonanceHz())
                             + " without a Q; its peak is not modelled");
@@ -98,7 +98,7 @@ public record ChainModel(String chainId, Sampler sampler, double samplingRateHz,
         for (Stage s : chain.getStages()) {
             if (s.getDevice() instanceof Amplifier a) {
                 if (a.getBandwidthLowHz() != null && a.getBandwidthLowHz() > 0) {
-                    conditioner.add(FrontEndFilters.highPass(a.getBandwidthLowHz()));
+                    conditioner.add(SensorAndConditioner.highPass(a.getBandwidthLowHz()));
                 }
                 if (a.getBandwidthHighHz() != null && a.getBandwidthHighHz() > 0) {
                     conditioner.add(org.foldbook.dsp.filter.AnalogLowPass.rc(a.getBandwidthHighHz()));
