@@ -163,8 +163,8 @@ class SweepCommandTest {
         assertEquals(0, r.code(), r.err());
         String text = Files.readString(csv);
         assertTrue(text.startsWith("index,up,down,rate_hz,"), text);
-        // the ideal decimator removes 3 kHz before 4 kS/s (stop band from 2 kHz): suppressed, not folded to 1 kHz
-        assertTrue(text.lines().anyMatch(l -> l.matches("1,1,2,4000\\.0,(999\\.99|1000\\.0)[0-9]*,,suppressed,0,.*")),
+        // the ideal decimator removes 3 kHz before 4 kS/s (stop band from 2 kHz): removed, not folded to 1 kHz
+        assertTrue(text.lines().anyMatch(l -> l.matches("1,1,2,4000\\.0,(999\\.99|1000\\.0)[0-9]*,,removed,0,.*")),
                 text);
         // and at 8 kS/s it survives
         assertTrue(text.lines().anyMatch(l -> l.startsWith("0,1,1,8000.0,") && l.contains(",survives,0,")), text);
@@ -208,5 +208,32 @@ class SweepCommandTest {
             assertEquals(0, r.code(), mode + ": " + r.err());
             assertTrue(r.out().contains("\"band\":{\"low\":0.0,\"high\":2000.0"), r.out());
         }
+    }
+
+    @Test
+    @DisplayName("--peaks prominence lists the floor's wiggles as source peaks; the default floor rule only the tone")
+    void peakRuleOption() throws IOException {
+        // one Welch segment (4096 samples): the noise bins scatter as a periodogram's do, so the prominence rule
+        // alone takes dozens of them for peaks; 12 dB over the running median leaves about 0.04 per spectrum
+        double[] x = sine(4096, 8000, 1000, 0.5);
+        ByteBuffer b = ByteBuffer.allocate(8 * x.length).order(ByteOrder.LITTLE_ENDIAN);
+        for (double v : x) {
+            b.putDouble(v);
+        }
+        Path raw = dir.resolve("tone.f64");
+        Files.write(raw, b.array());
+        Run floor = run("sweep", "--input", raw.toString(), "--rate", "8000", "--rates", "4000", "--quiet");
+        Run prom = run("sweep", "--input", raw.toString(), "--rate", "8000", "--rates", "4000", "--quiet",
+                "--peaks", "prominence");
+        assertEquals(0, floor.code(), floor.err());
+        assertEquals(0, prom.code(), prom.err());
+        int nFloor = floor.out().split("\\{\"id\":").length - 1;
+        int nProm = prom.out().split("\\{\"id\":").length - 1;
+        assertEquals(1, nFloor, floor.out().substring(0, Math.min(600, floor.out().length())));
+        assertTrue(nProm > 10, "prominence alone finds the noise's own peaks: " + nProm);
+        assertTrue(floor.out().contains("\"peakRule\":\"peaks stand 12.0 dB above"), floor.out().substring(0, 800));
+        Run bad = run("sweep", "--input", raw.toString(), "--rate", "8000", "--rates", "4000", "--peak-margin", "-1");
+        assertEquals(2, bad.code());
+        assertTrue(bad.err().contains("--peak-margin"), bad.err());
     }
 }

@@ -45,7 +45,7 @@ final class SweepCommand {
             if (o.stream()) {
                 try (RecordingLoader.Streamed rec = RecordingLoader.stream(o.input(), o.rate(), o.channel());
                         StreamingSweep engine = new StreamingSweep(o.threads())) {
-                    result = engine.run(rec, ladder(o, rec.rate()), mode(o), SpectrumSettings.DEFAULT, progress(o, err));
+                    result = engine.run(rec, ladder(o, rec.rate()), mode(o), o.spectrumSettings(), progress(o, err));
                 }
             } else {
                 RecordingLoader.Loaded rec = RecordingLoader.load(o.input(), o.rate(), o.channel());
@@ -148,6 +148,7 @@ final class SweepCommand {
     static Resampling mode(SweepOptions o) {
         return switch (o.mode()) {
             case "bare" -> Resampling.bare();
+            case "bare-kernel" -> Resampling.bareKernel();
             case "modelled" -> Resampling.modelledChannel(channel(o));
             case "ideal" -> Resampling.idealDecimator();
             case "polyphase-default" -> Resampling.polyphaseDefault();
@@ -158,7 +159,7 @@ final class SweepCommand {
 
     private static SweepResult sweep(SweepOptions o, RecordingLoader.Loaded rec, RateLadder ladder, PrintStream err) {
         Resampling mode = mode(o);
-        SourceSpectrum ref = SourceSpectrum.of(rec.samples(), rec.rate(), SpectrumSettings.DEFAULT);
+        SourceSpectrum ref = SourceSpectrum.of(rec.samples(), rec.rate(), o.spectrumSettings());
         if (o.mode().equals("preview")) {
             return new FoldPreview(ref).preview(ladder, mode);
         }

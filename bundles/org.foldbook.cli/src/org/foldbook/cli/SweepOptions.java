@@ -4,6 +4,9 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
 
+import org.foldbook.sweep.PeakThreshold;
+import org.foldbook.sweep.SpectrumSettings;
+
 /**
  * The options of {@code foldbook sweep}, parsed and checked. Every problem is an
  * {@link IllegalArgumentException} naming the option and the value.
@@ -19,7 +22,7 @@ import java.util.Optional;
  * @param spacing    {@code geom} or {@code lin}
  * @param rates      explicit requested rates (empty array: none)
  * @param maxDen     denominator bound of the up/down ratios
- * @param mode       bare, modelled, ideal, polyphase-default or preview
+ * @param mode       bare, bare-kernel, modelled, ideal, polyphase-default or preview
  * @param filter     chain filter for modelled/preview: {@code butterworth:ORDER:HZ}, {@code bessel:ORDER:HZ},
  *                   {@code rc:HZ}
  * @param digitizer  digitizer built-in filter for modelled/preview: pass fraction, stop fraction (of the new
@@ -31,19 +34,23 @@ import java.util.Optional;
  * @param format     json or csv
  * @param output     output file (empty: standard output)
  * @param quiet      no progress lines on standard error
+ * @param stream     read the recording once in blocks (StreamingSweep)
+ * @param threshold  the peak rule ({@code --peaks}, {@code --peak-margin}, {@code --quantisation-step})
  */
 record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Path> grid, double from, double to,
         int steps, String spacing, double[] rates, int maxDen, String mode, Optional<String> filter,
         Optional<double[]> digitizer, double exposure, double bandLow,
-        double bandHigh, int threads, String format, Optional<Path> output, boolean quiet, boolean stream) {
+        double bandHigh, int threads, String format, Optional<Path> output, boolean quiet, boolean stream,
+        PeakThreshold threshold) {
 
     static final String USAGE = """
             usage: foldbook sweep --input FILE [--rate HZ] [--channel N]
                      (--grid FILE | --to HZ --steps N [--from HZ] [--spacing geom|lin] | --rates HZ,HZ,...)
-                     [--max-denominator D] [--mode bare|modelled|ideal|polyphase-default|preview]
+                     [--max-denominator D] [--mode bare|bare-kernel|modelled|ideal|polyphase-default|preview]
                      [--filter KIND:...]
                      [--digitizer PASS:STOP:DB] [--exposure SECONDS]
                      [--band LO:HI] [--threads N] [--format json|csv] [--output FILE] [--quiet] [--stream]
+                     [--peaks floor|prominence] [--peak-margin DB] [--quantisation-step LSB]
               --input FILE    WAV recording, or raw little-endian float64 samples (then --rate is required)
               --rate HZ       sample rate of a raw float64 recording
               --channel N     channel to sweep, 1-based (default 1)
@@ -52,7 +59,8 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
               --spacing       geom (default, equal ratios) or lin
               --rates         explicit list of requested rates
               --max-denominator D  bound of the ratio denominators (default 1000)
-              --mode          bare (default): no anti-alias filter; modelled: the --filter chain with its
+              --mode          bare (default): no anti-alias filter, exact to 0.49 fs0; bare-kernel: the
+                              windowed-sinc kernel alone (side-by-side checks, exact to 0.39 fs0); modelled: the --filter chain with its
                               exact response, then bare; ideal: a correct decimator (0.45/0.5 fs, 100 dB);
                               polyphase-default: the default filter of a common polyphase resampler, for
                               side-by-side checks; preview: fold the source PSD through --filter (or none)
@@ -66,7 +74,18 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
               --output FILE   write there instead of standard output
               --stream        read the recording once in blocks instead of into memory: any length in a
                               small heap (about 0.5 MB a rate), the same answers
+              --peaks         floor (default): peaks stand --peak-margin dB (default 12) above a running
+                              median of the spectrum; prominence: the prominence rule alone (side-by-side)
+              --quantisation-step LSB  the digitizer's step in the recording's units: peaks must also
+                              stand the margin above its noise density q^2/(6 fs)
             """;
+
+    /** The spectrum rules these options ask for. */
+    SpectrumSettings spectrumSettings() {
+        SpectrumSettings d = SpectrumSettings.DEFAULT;
+        return threshold.noiseAware() ? d.withThreshold(threshold)
+                : SpectrumSettings.PROMINENCE_ONLY.withThreshold(threshold);
+    }
 
     static SweepOptions parse(String[] args) {
         Path input = null;
@@ -90,6 +109,7 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
         Path output = null;
         boolean quiet = false;
         boolean stream = false;
+        PeakThreshold threshold = PeakThreshold.DEFAULT;
         for (int i = 0; i < args.length; i++) {
             String a = args[i];
             if (a.equals("--quiet")) {
@@ -124,7 +144,7 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
                     }
                 }
                 case "--max-denominator" -> maxDen = integer(a, v, 1);
-                case "--mode" -> mode = oneOf(a, v, "bare", "modelled", "ideal", "polyphase-default", "preview");
+                case "--mode" -> mode = oneOf(a, v, "bare", "bare-kernel", "modelled", "ideal", "polyphase-default", "preview");
                 case "--filter" -> filter = v;
                 case "--digitizer" -> {
                     String[] p = v.split(":");
@@ -134,6 +154,11 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
                     digitizer = new double[] {positive(a, p[0]), positive(a, p[1]), positive(a, p[2])};
                 }
                 case "--exposure" -> exposure = positive(a, v);
+                case "--peaks" -> threshold = oneOf(a, v, "floor", "prominence").equals("floor")
+                        ? new PeakThreshold(true, threshold.marginDb(), threshold.floorWindowBins(), threshold.quantisationStep())
+                        : new PeakThreshold(false, threshold.marginDb(), threshold.floorWindowBins(), threshold.quantisationStep());
+                case "--peak-margin" -> threshold = threshold.withMarginDb(nonNegative(a, v));
+                case "--quantisation-step" -> threshold = threshold.withQuantisationStep(positive(a, v));
                 case "--band" -> {
                     String[] p = v.split(":");
                     if (p.length != 2) {
@@ -171,7 +196,7 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
         return new SweepOptions(input, Optional.ofNullable(rate), channel, Optional.ofNullable(grid), from, to,
                 steps, spacing, rates, maxDen, mode, Optional.ofNullable(filter),
                 Optional.ofNullable(digitizer), exposure, bandLow, bandHigh, threads, format,
-                Optional.ofNullable(output), quiet, stream);
+                Optional.ofNullable(output), quiet, stream, threshold);
     }
 
     private static double number(String opt, String v) {
@@ -190,6 +215,14 @@ record SweepOptions(Path input, Optional<Double> rate, int channel, Optional<Pat
         double d = number(opt, v);
         if (!(d > 0)) {
             throw new IllegalArgumentException(opt + " must be > 0, was '" + v + "'");
+        }
+        return d;
+    }
+
+    private static double nonNegative(String opt, String v) {
+        double d = number(opt, v);
+        if (!(d >= 0) || Double.isInfinite(d)) {
+            throw new IllegalArgumentException(opt + " must be a finite number >= 0, was '" + v + "'");
         }
         return d;
     }

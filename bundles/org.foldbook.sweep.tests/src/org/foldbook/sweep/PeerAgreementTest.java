@@ -40,16 +40,16 @@ class PeerAgreementTest {
     }
 
     @Test
-    @DisplayName("bare mode: every rate's peaks = peer mode a (scipy welch + find_peaks), levels within 0.01 dB")
+    @DisplayName("bare-kernel mode: every rate's peaks = peer mode a (scipy welch + find_peaks), levels within 0.01 dB")
     void bareModeMatchesPeerModeA() {
-        SweepResult r = engine.run(signal, grid, Resampling.bare(), SpectrumSettings.DEFAULT, SweepProgress.NONE);
+        SweepResult r = engine.run(signal, grid, Resampling.bareKernel(), SpectrumSettings.PROMINENCE_ONLY, SweepProgress.NONE);
         assertSameAsPeer(r, MiniJson.arr(details.get("a")));
     }
 
     @Test
     @DisplayName("polyphase-default mode: every rate's peaks = peer mode b (scipy.signal.resample_poly defaults)")
     void peerPolyModeMatchesPeerModeB() {
-        SweepResult r = engine.run(signal, grid, Resampling.polyphaseDefault(), SpectrumSettings.DEFAULT,
+        SweepResult r = engine.run(signal, grid, Resampling.polyphaseDefault(), SpectrumSettings.PROMINENCE_ONLY,
                 SweepProgress.NONE);
         assertSameAsPeer(r, MiniJson.arr(details.get("b")));
     }

@@ -157,7 +157,7 @@ class VerdictTest {
     }
 
     @Test
-    @DisplayName("two tones folding onto one bin: the weaker MERGES into the stronger")
+    @DisplayName("two tones folding onto one bin: the weaker COINCIDES with the stronger, and says so")
     void mergeOfTwoAliases() {
         double fs0 = 102_400;
         // at 10240 S/s: 1000 Hz stays, 11240 Hz folds to |11240 - 10240| = 1000 Hz, on top of it
@@ -166,8 +166,9 @@ class VerdictTest {
                 SpectrumSettings.DEFAULT, SweepProgress.NONE);
         RateResult low = r.rates().get(1);
         assertEquals(Verdict.SURVIVES, low.fate(0).verdict());
-        assertEquals(Verdict.MERGES, low.fate(1).verdict());
-        assertEquals(0, low.fate(1).mergedInto());
+        assertEquals(Verdict.COINCIDES, low.fate(1).verdict());
+        assertEquals(0, low.fate(1).otherPeak());
+        assertTrue(low.fate(1).reason().contains("same bin as source peak 0"), low.fate(1).reason());
     }
 
     @Test
@@ -186,30 +187,50 @@ class VerdictTest {
         assertEquals(Verdict.FOLDS, r.fate(1).verdict());
         assertEquals(2000, r.fate(1).apparentFrequency(), 1e-9);
         assertEquals(-2.0, r.fate(1).gainDb(), 1e-9, "seen bin power -12 dB vs source bin power -10 dB");
-        assertEquals(Verdict.SUPPRESSED, r.fate(2).verdict());
+        // 7300 Hz lands at 2300 Hz: nothing there, no floor known and no chain: a real disagreement, MISSING
+        assertEquals(Verdict.MISSING, r.fate(2).verdict());
         assertEquals(2300, r.fate(2).apparentFrequency(), 1e-9);
         assertEquals(Verdict.UNEXPLAINED, r.observed().get(1).verdict());
         assertEquals(-1, r.observed().get(1).sourcePeak());
-        // beyond the match radius (0.05 source bin + 1.5 bins = 2 Hz) it is no longer the source peak
+        // with a floor of -30 dB per bin (density, bin width 1 Hz) and the 12 dB margin, its -20 dB bin power is buried:
+        // no chain attenuated it, so it is not "removed"
+        double[] floor = new double[4001];
+        java.util.Arrays.fill(floor, -30);
+        RateResult withFloor = c.classify(step, 1000, df, seen, null, floor, Double.NEGATIVE_INFINITY);
+        assertEquals(Verdict.BURIED, withFloor.fate(2).verdict());
+        assertTrue(withFloor.fate(2).reason().contains("not removed by the chain"), withFloor.fate(2).reason());
+        // beyond the match radius (0.05 source bin + 1.5 bins = 2 Hz) it is no longer the source peak: the
+        // stronger peak 2.5 Hz (2.5 bins) away hides it
         RateResult far = c.classify(step, 1000, df, List.of(peak(1002.5, 0)));
-        assertEquals(Verdict.SUPPRESSED, far.fate(0).verdict());
+        assertEquals(Verdict.HIDDEN, far.fate(0).verdict());
         assertEquals(Verdict.UNEXPLAINED, far.observed().get(0).verdict());
-        // 6001.8 Hz folds to 1001.8 Hz, 1.8 bins from the seen 1000 Hz peak: within the Hann main lobe's half
-        // width (2 bins, Harris 1978) of a stronger peak it cannot be resolved: MERGES; at 3 bins it is SUPPRESSED
+        // 6001.8 Hz folds to 1001.8 Hz, 1.8 bins from the seen 1000 Hz peak of source peak 0: not resolved beside it.
+        // HIDDEN, naming it, the separation and the segment for 4 bins of separation: 4·5000/1.8 -> 16384 samples
         VerdictClassifier two = new VerdictClassifier(List.of(new SourcePeak(0, 1000, -10, 0),
                 new SourcePeak(1, 6001.8, -20, -10)), df0, 1.5);
-        RateResult m = two.classify(step, 1000, df, List.of(peak(1000.0, 0)));
-        assertEquals(Verdict.MERGES, m.fate(1).verdict());
-        assertEquals(0, m.fate(1).mergedInto());
-        VerdictClassifier apart = new VerdictClassifier(List.of(new SourcePeak(0, 1000, -10, 0),
-                new SourcePeak(1, 6003, -20, -10)), df0, 1.5);
-        assertEquals(Verdict.SUPPRESSED, apart.classify(step, 1000, df, List.of(peak(1000.0, 0))).fate(1).verdict());
+        SourceFate h = two.classify(step, 1000, df, List.of(peak(1000.0, 0))).fate(1);
+        assertEquals(Verdict.HIDDEN, h.verdict());
+        assertEquals(0, h.otherPeak());
+        assertEquals(1000.0, h.otherFrequency(), 1e-9);
+        assertEquals(16384, h.neededSegment());
+        assertTrue(h.reason().contains("1.80 Hz") && h.reason().contains("16384"), h.reason());
+        // 6000.5 Hz lands 0.5 Hz (half a bin) from source peak 0's 1000 Hz: the same bin, COINCIDES
+        VerdictClassifier same = new VerdictClassifier(List.of(new SourcePeak(0, 1000, -10, 0),
+                new SourcePeak(1, 6000.5, -20, -10)), df0, 1.5);
+        assertEquals(Verdict.COINCIDES, same.classify(step, 1000, df, List.of(peak(1000.0, 0))).fate(1).verdict());
         // through an 8th-order Butterworth at 100 Hz, 1000 Hz is predicted 160 dB down (|H|^2 = 1/(1+10^16)): a
-        // seen peak at the source's full level is far too strong to be it (more than 6 dB above the prediction)
+        // seen peak at the source's full level is far too strong to be it; with the floor it is REMOVED
         Resampling deep = Resampling.modelledFilter(AnalogLowPass.butterworth(8, 100));
         assertEquals(-160, 10 * Math.log10(deep.powerGain(1000, step)), 1e-6);
-        assertEquals(Verdict.SUPPRESSED, c.classify(step, 1000, df, seen, deep).fate(0).verdict());
+        SourceFate removed = c.classify(step, 1000, df, seen, deep, floor, Double.NEGATIVE_INFINITY).fate(0);
+        assertEquals(Verdict.REMOVED, removed.verdict());
+        assertTrue(removed.reason().contains("below the detection floor"), removed.reason());
         assertEquals(Verdict.SURVIVES, c.classify(step, 1000, df, List.of(peak(1000.4, -175)), deep).fate(0).verdict());
+        // 4990 Hz at 5 kS/s lands at 10 Hz, 20 Hz from DC... within two bins of DC only for wide bins: bin 10 Hz
+        VerdictClassifier dc = new VerdictClassifier(List.of(new SourcePeak(0, 4990, -10, 0)), df0, 1.5);
+        assertEquals(Verdict.AT_DC, dc.classify(step, 1000, 10.0, List.of()).fate(0).verdict());
+        VerdictClassifier ny = new VerdictClassifier(List.of(new SourcePeak(0, 2495, -10, 0)), df0, 1.5);
+        assertEquals(Verdict.AT_NYQUIST, ny.classify(step, 1000, 10.0, List.of()).fate(0).verdict());
     }
 
     static org.foldbook.dsp.peaks.SpectralPeak peak(double f, double levelDb) {

@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 
-import org.foldbook.dsp.peaks.PeakFinder;
 import org.foldbook.dsp.peaks.SpectralPeak;
 
 /**
@@ -35,7 +34,6 @@ public final class FoldPreview {
 
     private final SourceSpectrum source;
     private final VerdictClassifier classifier;
-    private final PeakFinder finder;
     private final double[] continuum;
     private final double[] freq;
     private final double[] linePower;
@@ -43,7 +41,6 @@ public final class FoldPreview {
     public FoldPreview(SourceSpectrum source) {
         this.source = Objects.requireNonNull(source, "source");
         this.classifier = source.classifier();
-        this.finder = SourceSpectrum.finder(source.settings());
         int k = source.bins();
         this.freq = new double[k];
         this.continuum = source.psdValues();
@@ -141,8 +138,10 @@ public final class FoldPreview {
     public RateResult preview(RateStep step, Resampling chain) {
         double[] p = foldedPsd(step, chain);
         double df = step.effectiveRate() / segmentAt(step);
-        List<SpectralPeak> peaks = finder.findInPower(p, p.length, df);
-        return classifier.classify(step, 0, df, peaks, chain);
+        SpectrumSettings st = source.settings();
+        List<SpectralPeak> peaks = st.finderAt(step.effectiveRate()).findInPower(p, p.length, df);
+        return classifier.classify(step, 0, df, peaks, chain, SweepEngine.floorOf(p, p.length, st),
+                st.threshold().quantisationFloorDb(step.effectiveRate()));
     }
 
     /** The preview over a whole ladder, as a sweep result whose mode is {@code preview-<chain>}. */
@@ -157,6 +156,6 @@ public final class FoldPreview {
         }
         return new SweepResult("preview-" + chain.name(), source.sourceRate(), source.samples(), source.binWidth(),
                 source.peaks(), rates, Optional.empty(), chain.accuracy(source.sourceRate()),
-                chain.warnings(source.sourceRate()));
+                chain.warnings(source.sourceRate()), source.summarised(), source.settings().threshold().describe());
     }
 }

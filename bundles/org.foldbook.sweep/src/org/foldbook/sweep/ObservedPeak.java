@@ -9,6 +9,8 @@ package org.foldbook.sweep;
  * @param sourcePeak  id of the source peak it came from, or -1 when unexplained
  * @param gainDb      bin power at this rate minus the source peak's bin power (the attenuation it got,
  *                    negative = weaker), NaN when unexplained
+ * @param reason      the verdict in words
  */
-public record ObservedPeak(double frequency, double levelDb, Verdict verdict, int sourcePeak, double gainDb) {
+public record ObservedPeak(double frequency, double levelDb, Verdict verdict, int sourcePeak, double gainDb,
+        String reason) {
 }

@@ -60,6 +60,14 @@ public interface Resampling {
     /** |H(f)|² applied to source content at {@code frequencyHz} on its way to {@code step}'s rate. */
     double powerGain(double frequencyHz, RateStep step);
 
+    /**
+     * True when {@link #powerGain} is a stated bound ("at least so many dB down") rather than the response
+     * itself, as for a design that meets a mask: a component not seen after strong attenuation is then removed.
+     */
+    default boolean powerGainIsUpperBound() {
+        return false;
+    }
+
     /** Where this simulation is accurate for a recording at {@code sourceRate}, in words and figures. */
     SimulatorAccuracy accuracy(double sourceRate);
 
@@ -68,8 +76,22 @@ public interface Resampling {
         return List.of();
     }
 
-    /** Mode 1: a digitizer with no anti-alias filter (windowed-sinc evaluation, see {@link BareSampler}). */
+    /**
+     * Mode 1: a digitizer with no anti-alias filter. The recording is first brought to 2·fs0 by the exact
+     * filter of an empty chain ({@link ExactChainFilter}: flat to 0.49·fs0), then evaluated at the new instants
+     * by the windowed sinc ({@link BareSampler}), which there works far inside its flat band: every component
+     * up to 0.49·fs0 arrives within −100 dB, and the interpolator adds no images of its own.
+     */
     static Resampling bare() {
+        return new ModelledFilter(ModelledChannel.none(), "bare");
+    }
+
+    /**
+     * The windowed-sinc kernel alone on the recording (W = 16, β = 10: the interpolator of a common simulation
+     * of this kind), for side-by-side checks: accurate to −100 dB only up to 0.39·fs0; above it content is
+     * attenuated and the kernel makes images at fs0 − f.
+     */
+    static Resampling bareKernel() {
         return Bare.INSTANCE;
     }
 
@@ -151,6 +173,11 @@ public interface Resampling {
         }
 
         @Override
+        public boolean powerGainIsUpperBound() {
+            return true;
+        }
+
+        @Override
         public SimulatorAccuracy accuracy(double sourceRate) {
             return new SimulatorAccuracy(spec.passFraction(), Double.NaN, -spec.attenuationDb(), String.format(
                     java.util.Locale.ROOT, "a correct decimator: pass band to %.3g of each new rate, at least %.0f dB "
@@ -209,6 +236,11 @@ public interface Resampling {
         }
 
         @Override
+        public boolean powerGainIsUpperBound() {
+            return true;
+        }
+
+        @Override
         public SimulatorAccuracy accuracy(double sourceRate) {
             return new SimulatorAccuracy(0.40, Double.NaN, -65, "the default filter of a common polyphase resampler "
                     + "(Kaiser, beta 5): flat to 0.40 of each new rate, -6 dB at half of it, stop band near -65 dB; "
@@ -216,7 +248,7 @@ public interface Resampling {
         }
     }
 
-    /** The bare sampler. */
+    /** The bare kernel alone, on the recording at fs0. */
     final class Bare implements Resampling {
         static final Bare INSTANCE = new Bare();
 
@@ -225,7 +257,7 @@ public interface Resampling {
 
         @Override
         public String name() {
-            return "bare";
+            return "bare-kernel";
         }
 
         @Override
@@ -243,19 +275,26 @@ public interface Resampling {
         @Override
         public SimulatorAccuracy accuracy(double sourceRate) {
             return new SimulatorAccuracy(Double.NaN, 0.39 * sourceRate, -100, String.format(java.util.Locale.ROOT,
-                    "bare sampling is simulated to -100 dB re each component up to %.6g Hz (0.39 of the source rate); "
-                            + "above it the interpolator attenuates content and adds images of its own", 0.39 * sourceRate));
+                    "the bare kernel alone is accurate to -100 dB re each component up to %.6g Hz (0.39 of the source "
+                            + "rate); above it the interpolator attenuates content and adds images of its own at the "
+                            + "source rate minus the frequency", 0.39 * sourceRate));
         }
     }
 
     /** The modelled channel: analog filters and exposure once, exactly, at 2·fs0; the digitizer filter per rate. */
     final class ModelledFilter implements Resampling {
         private final ModelledChannel channel;
+        private final String name;
         private final Map<Double, ExactChainFilter> exact = new ConcurrentHashMap<>();
         private final Map<RateStep, ModelledChannelResampler> samplers = new ConcurrentHashMap<>();
 
         ModelledFilter(ModelledChannel channel) {
+            this(channel, "modelled");
+        }
+
+        ModelledFilter(ModelledChannel channel, String name) {
             this.channel = channel;
+            this.name = name;
         }
 
         public ModelledChannel channel() {
@@ -264,7 +303,7 @@ public interface Resampling {
 
         @Override
         public String name() {
-            return "modelled";
+            return name;
         }
 
         private ExactChainFilter exactAt(double sourceRate) {
@@ -313,9 +352,14 @@ public interface Resampling {
             ExactChainFilter f = exactAt(sourceRate);
             double upTo = ExactChainFilter.EXACT_UP_TO_FRACTION * sourceRate;
             return new SimulatorAccuracy(Double.NaN, upTo, Math.max(ExactChainFilter.TARGET_FLOOR_DB, f.accurateAboveDb()),
-                    String.format(java.util.Locale.ROOT, "the chain's response is applied within 0.1 dB wherever it lies "
-                            + "above %.0f dB, up to %.6g Hz (0.49 of the source rate), then sampled with an error below "
-                            + "-100 dB", Math.max(ExactChainFilter.TARGET_FLOOR_DB, f.accurateAboveDb()), upTo));
+                    channel.analogFilters().isEmpty() && !(channel.exposureSeconds() > 0)
+                            ? String.format(java.util.Locale.ROOT, "every component up to %.6g Hz (0.49 of the source "
+                                    + "rate) is sampled with an error below -100 dB re itself; the simulator adds no "
+                                    + "images of its own", upTo)
+                            : String.format(java.util.Locale.ROOT, "the chain's response is applied within 0.1 dB "
+                                    + "wherever it lies above %.0f dB, up to %.6g Hz (0.49 of the source rate), then "
+                                    + "sampled with an error below -100 dB",
+                                    Math.max(ExactChainFilter.TARGET_FLOOR_DB, f.accurateAboveDb()), upTo));
         }
 
         @Override

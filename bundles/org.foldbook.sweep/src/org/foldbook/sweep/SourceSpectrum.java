@@ -21,9 +21,10 @@ public final class SourceSpectrum {
     private final List<SourcePeak> peaks;
     private final int[] peakBins;
     private final SpectrumSettings settings;
+    private final SummarisedPeaks summarised;
 
     private SourceSpectrum(double sourceRate, long samples, int segment, double[] psd, List<SourcePeak> peaks,
-            int[] peakBins, SpectrumSettings settings) {
+            int[] peakBins, SpectrumSettings settings, SummarisedPeaks summarised) {
         this.sourceRate = sourceRate;
         this.samples = samples;
         this.segment = segment;
@@ -31,6 +32,7 @@ public final class SourceSpectrum {
         this.peaks = List.copyOf(peaks);
         this.peakBins = peakBins;
         this.settings = settings;
+        this.summarised = summarised;
     }
 
     /**
@@ -60,17 +62,38 @@ public final class SourceSpectrum {
         double binWidth = sourceRate / segment;
         // same bins as the sweep's finder, but with the Hann kernel's sub-bin estimate (PeakFinder: below
         // 1e-3 bin and 0.01 dB for a lone tone), so a source peak's frequency is known far better than its bin
-        PeakFinder refined = PeakFinder.builder().prominenceDb(settings.prominenceDb())
-                .windowKernel(WindowShape.HANN.periodic(segment)).build();
-        List<SpectralPeak> found = refined.findInPower(psd, psd.length, binWidth);
+        PeakFinder.Builder fb = PeakFinder.builder().prominenceDb(settings.prominenceDb())
+                .windowKernel(WindowShape.HANN.periodic(segment));
+        PeakThreshold t = settings.threshold();
+        if (t.noiseAware()) {
+            fb.noiseFloor(t.floorWindowBins(), t.marginDb());
+            double q = t.quantisationFloorDb(sourceRate);
+            if (q > Double.NEGATIVE_INFINITY) {
+                fb.minimumLevelDb(q + t.marginDb());
+            }
+        }
+        List<SpectralPeak> found = fb.build().findInPower(psd, psd.length, binWidth);
+        double strongest = Double.NEGATIVE_INFINITY;
+        for (SpectralPeak p : found) {
+            strongest = Math.max(strongest, p.levelDb());
+        }
         List<SourcePeak> refs = new ArrayList<>(found.size());
         int[] bins = new int[found.size()];
         double binDb = 10 * Math.log10(binWidth);
+        int left = 0;
+        double highestLeft = Double.NaN;
         for (SpectralPeak p : found) {
+            if (p.levelDb() < strongest - settings.listWithinDb()) {
+                left++;
+                highestLeft = Double.isNaN(highestLeft) ? p.levelDb() : Math.max(highestLeft, p.levelDb());
+                continue;
+            }
             bins[refs.size()] = p.bin();
             refs.add(new SourcePeak(refs.size(), p.frequencyHz(), p.levelDb(), p.levelDb() + binDb));
         }
-        return new SourceSpectrum(sourceRate, samples, segment, psd.clone(), refs, bins, settings);
+        return new SourceSpectrum(sourceRate, samples, segment, psd.clone(), refs,
+                java.util.Arrays.copyOf(bins, refs.size()), settings,
+                new SummarisedPeaks(left, settings.listWithinDb(), highestLeft));
     }
 
     /** Bin of the local maximum of source peak {@code id}. */
@@ -78,8 +101,9 @@ public final class SourceSpectrum {
         return peakBins[id];
     }
 
-    static PeakFinder finder(SpectrumSettings settings) {
-        return PeakFinder.builder().prominenceDb(settings.prominenceDb()).build();
+    /** Source peaks left out of {@link #peaks()} for lying far below the strongest. */
+    public SummarisedPeaks summarised() {
+        return summarised;
     }
 
     public double sourceRate() {
@@ -125,6 +149,6 @@ public final class SourceSpectrum {
 
     /** The verdict rules against these reference peaks. */
     public VerdictClassifier classifier() {
-        return new VerdictClassifier(peaks, binWidth(), settings.matchBins());
+        return new VerdictClassifier(peaks, binWidth(), settings.matchBins(), settings.threshold().marginDb());
     }
 }

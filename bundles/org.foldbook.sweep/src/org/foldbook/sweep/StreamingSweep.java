@@ -18,7 +18,6 @@ import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 
 import org.foldbook.dsp.Check;
-import org.foldbook.dsp.peaks.PeakFinder;
 import org.foldbook.dsp.peaks.SpectralPeak;
 import org.foldbook.dsp.resample.ResampleRun;
 import org.foldbook.dsp.resample.Resampler;
@@ -169,16 +168,16 @@ public final class StreamingSweep implements AutoCloseable {
         sourceWelch.finish(srcPsd);
         SourceSpectrum ref = SourceSpectrum.fromPsd(srcPsd, fs0, n, sourceSegment, settings);
         VerdictClassifier classifier = ref.classifier();
-        PeakFinder finder = SourceSpectrum.finder(settings);
         RateResult[] results = new RateResult[ladder.size()];
         AtomicInteger done = new AtomicInteger();
         forEachRate(rates, r -> {
-            RateResult result = r.finish(finder, classifier, mode);
+            RateResult result = r.finish(settings, classifier, mode);
             results[r.step.index()] = result;
             progress.rateDone(result, done.incrementAndGet(), results.length);
         });
         return new SweepResult(mode.name(), fs0, n, ref.binWidth(), ref.peaks(), Arrays.asList(results),
-                Optional.empty(), mode.accuracy(fs0), mode.warnings(fs0));
+                Optional.empty(), mode.accuracy(fs0), mode.warnings(fs0), ref.summarised(),
+                settings.threshold().describe());
     }
 
     /** Reads until the block is full or the source ends. */
@@ -278,13 +277,15 @@ public final class StreamingSweep implements AutoCloseable {
             this.run = resampler.start(acc);
         }
 
-        RateResult finish(PeakFinder finder, VerdictClassifier classifier, Resampling mode) {
+        RateResult finish(SpectrumSettings settings, VerdictClassifier classifier, Resampling mode) {
             run.finish();
             double[] psd = new double[welch.bins()];
             acc.finish(psd);
             double binWidth = step.effectiveRate() / welch.segmentLength();
-            List<SpectralPeak> peaks = finder.findInPower(psd, welch.bins(), binWidth);
-            return classifier.classify(step, outputs, binWidth, peaks, mode);
+            double fs = step.effectiveRate();
+            List<SpectralPeak> peaks = settings.finderAt(fs).findInPower(psd, welch.bins(), binWidth);
+            return classifier.classify(step, outputs, binWidth, peaks, mode, SweepEngine.floorOf(psd, welch.bins(), settings),
+                    settings.threshold().quantisationFloorDb(fs));
         }
     }
 

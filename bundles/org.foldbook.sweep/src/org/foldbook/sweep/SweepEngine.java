@@ -16,7 +16,7 @@ import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 
 import org.foldbook.dsp.Check;
-import org.foldbook.dsp.peaks.PeakFinder;
+import org.foldbook.dsp.peaks.NoiseFloor;
 import org.foldbook.dsp.peaks.SpectralPeak;
 import org.foldbook.dsp.resample.BareSampler;
 import org.foldbook.dsp.resample.KaiserPolyphaseResampler;
@@ -96,7 +96,6 @@ public final class SweepEngine implements AutoCloseable {
         double[] x = mode.prepare(source, ref.sourceRate());
         SpectrumSettings settings = ref.settings();
         VerdictClassifier classifier = ref.classifier();
-        PeakFinder finder = SourceSpectrum.finder(settings);
         Map<Integer, Welch> welchBySegment = new ConcurrentHashMap<>();
         ThreadLocal<WorkerState> state = ThreadLocal.withInitial(() -> new WorkerState(settings.maxSegment()));
         int total = ladder.size();
@@ -109,7 +108,7 @@ public final class SweepEngine implements AutoCloseable {
         for (RateStep step : order) {
             futures.add(pool.submit(() -> {
                 WorkerState ws = state.get();
-                RateResult r = runRate(x, step, mode, settings, classifier, finder, welchBySegment, ws, progress);
+                RateResult r = runRate(x, step, mode, settings, classifier, welchBySegment, ws, progress);
                 results[step.index()] = r;
                 progress.rateDone(r, done.incrementAndGet(), total);
                 return null;
@@ -135,11 +134,12 @@ public final class SweepEngine implements AutoCloseable {
             throw new IllegalStateException(c);
         }
         return new SweepResult(mode.name(), ref.sourceRate(), source.length, ref.binWidth(), ref.peaks(),
-                Arrays.asList(results), Optional.empty(), mode.accuracy(ref.sourceRate()), mode.warnings(ref.sourceRate()));
+                Arrays.asList(results), Optional.empty(), mode.accuracy(ref.sourceRate()), mode.warnings(ref.sourceRate()),
+                ref.summarised(), settings.threshold().describe());
     }
 
     private static RateResult runRate(double[] x, RateStep step, Resampling mode, SpectrumSettings settings,
-            VerdictClassifier classifier, PeakFinder finder, Map<Integer, Welch> welchBySegment, WorkerState ws,
+            VerdictClassifier classifier, Map<Integer, Welch> welchBySegment, WorkerState ws,
             SweepProgress progress) {
         if (progress.isCancelled()) {
             throw new CancellationException("sweep cancelled");
@@ -181,8 +181,19 @@ public final class SweepEngine implements AutoCloseable {
         }
         ws.welch.finish(ws.psd);
         double binWidth = fs / seg;
-        List<SpectralPeak> peaks = finder.findInPower(ws.psd, welch.bins(), binWidth);
-        return classifier.classify(step, m, binWidth, peaks, mode);
+        List<SpectralPeak> peaks = settings.finderAt(fs).findInPower(ws.psd, welch.bins(), binWidth);
+        return classifier.classify(step, m, binWidth, peaks, mode, floorOf(ws.psd, welch.bins(), settings),
+                settings.threshold().quantisationFloorDb(fs));
+    }
+
+    /** Running-median floor of a PSD in dB (the verdicts' detection floor, whatever the peak rule). */
+    static double[] floorOf(double[] psd, int bins, SpectrumSettings settings) {
+        double[] db = new double[bins];
+        for (int k = 0; k < bins; k++) {
+            db[k] = 10 * Math.log10(Math.max(psd[k], 1e-300));
+        }
+        int w = Math.min(settings.threshold().floorWindowBins(), bins % 2 == 1 ? bins : bins - 1);
+        return NoiseFloor.runningMedian(db, bins, Math.max(1, w));
     }
 
     /** Re-samplers that can compute any range of outputs from the whole input (no streaming state). */

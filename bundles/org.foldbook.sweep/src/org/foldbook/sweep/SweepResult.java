@@ -21,10 +21,12 @@ import org.foldbook.dsp.resample.SimulationWarning;
  * @param band          the band summary, if a band was asked for
  * @param accuracy      the band in which the mode simulates faithfully
  * @param warnings      bands where the simulation cannot honour the modelled chain, and by how much
+ * @param summarised    source peaks left out of {@code sources} for lying far below the strongest
+ * @param peakRule      the peak threshold in words
  */
 public record SweepResult(String mode, double sourceRate, long sourceSamples, double sourceBinWidth,
         List<SourcePeak> sources, List<RateResult> rates, Optional<BandSummary> band, SimulatorAccuracy accuracy,
-        List<SimulationWarning> warnings) {
+        List<SimulationWarning> warnings, SummarisedPeaks summarised, String peakRule) {
 
     /** Version of the JSON/CSV layout; raise it when a field changes meaning. */
     public static final int FORMAT_VERSION = 1;
@@ -40,7 +42,8 @@ public record SweepResult(String mode, double sourceRate, long sourceSamples, do
     public SweepResult withBand(double low, double high) {
         BandSummary b = new BandSummary(low, high, Double.NaN);
         return new SweepResult(mode, sourceRate, sourceSamples, sourceBinWidth, sources, rates,
-                Optional.of(new BandSummary(low, high, lowestAliasFreeRate(b))), accuracy, warnings);
+                Optional.of(new BandSummary(low, high, lowestAliasFreeRate(b))), accuracy, warnings, summarised,
+                peakRule);
     }
 
     /** Rates from highest to lowest (ladder order is kept in {@link #rates()}). */
@@ -85,7 +88,8 @@ public record SweepResult(String mode, double sourceRate, long sourceSamples, do
             for (SourceFate f : r.fates()) {
                 SourcePeak s = sources.get(f.sourcePeak());
                 boolean folded = VerdictClassifier.foldOrder(s.frequency(), fs) != 0;
-                boolean seen = f.verdict() == Verdict.FOLDS || (f.verdict() == Verdict.MERGES && folded);
+                // a folded component in the band spoils it whether the spectrum shows it or hides it
+                boolean seen = folded && f.verdict().present();
                 if (seen && f.apparentFrequency() >= b.low() - sourceBinWidth / 2
                         && f.apparentFrequency() <= b.high() + sourceBinWidth / 2) {
                     clean = false;
@@ -111,7 +115,10 @@ public record SweepResult(String mode, double sourceRate, long sourceSamples, do
             w.beginObject().member("id", s.id()).member("frequency", s.frequency()).member("levelDb", s.levelDb())
                     .endObject();
         }
-        w.endArray().endObject();
+        w.endArray();
+        w.name("summarised").beginObject().member("count", summarised.count())
+                .member("belowDb", summarised.belowDb()).member("highestDb", summarised.highestDb()).endObject();
+        w.member("peakRule", peakRule).endObject();
         w.name("accuracy").beginObject().member("upToHz", accuracy.upToHz())
                 .member("upToRateFraction", accuracy.upToNewRateFraction()).member("levelDb", accuracy.levelDb())
                 .member("statement", accuracy.statement()).endObject();
@@ -137,18 +144,25 @@ public record SweepResult(String mode, double sourceRate, long sourceSamples, do
                 } else {
                     w.value(p.sourcePeak());
                 }
-                w.member("gainDb", p.gainDb()).endObject();
+                w.member("gainDb", p.gainDb()).member("reason", p.reason()).endObject();
             }
             w.endArray();
             w.name("sources").beginArray();
             for (SourceFate f : r.fates()) {
                 w.beginObject().member("sourcePeak", f.sourcePeak()).member("verdict", f.verdict().key())
                         .member("apparentFrequency", f.apparentFrequency())
-                        .member("observedFrequency", f.observedFrequency()).member("gainDb", f.gainDb());
-                if (f.mergedInto() >= 0) {
-                    w.member("mergedInto", f.mergedInto());
+                        .member("observedFrequency", f.observedFrequency()).member("gainDb", f.gainDb())
+                        .member("predictedGainDb", f.predictedGainDb()).member("floorDb", f.floorDb());
+                if (f.otherPeak() >= 0) {
+                    w.member("otherPeak", f.otherPeak());
                 }
-                w.endObject();
+                if (Double.isFinite(f.otherFrequency())) {
+                    w.member("otherFrequency", f.otherFrequency());
+                }
+                if (f.neededSegment() > 0) {
+                    w.member("neededSegment", f.neededSegment());
+                }
+                w.member("reason", f.reason()).endObject();
             }
             w.endArray().endObject();
         }
@@ -171,7 +185,7 @@ public record SweepResult(String mode, double sourceRate, long sourceSamples, do
 
     /**
      * The CSV form: a header, then one row per peak seen at each rate and one per source peak that is not
-     * seen on its own there (suppressed or merged; frequency = where it would appear, level empty).
+     * seen on its own there (any other verdict; frequency = where it would appear, level empty).
      */
     public String toCsv() {
         StringBuilder b = new StringBuilder(
@@ -185,7 +199,7 @@ public record SweepResult(String mode, double sourceRate, long sourceSamples, do
                         .append(',').append(num(p.gainDb())).append('\n');
             }
             for (SourceFate f : r.fates()) {
-                if (f.verdict() == Verdict.SUPPRESSED || f.verdict() == Verdict.MERGES) {
+                if (f.verdict() != Verdict.SURVIVES && f.verdict() != Verdict.FOLDS) {
                     b.append(head).append(num(f.apparentFrequency())).append(",,").append(f.verdict().key())
                             .append(',').append(f.sourcePeak()).append(',').append(num(f.gainDb())).append('\n');
                 }

@@ -1,20 +1,41 @@
 package org.foldbook.sweep;
 
-/** What became of a spectral peak at one rate of a sweep. */
+/** What became of a spectral peak at one rate of a sweep. Every verdict comes with its reason in words. */
 public enum Verdict {
     /** Seen at its true frequency (within tolerance): the rate keeps it as it is. */
-    SURVIVES,
-    /** Seen at the predicted apparent frequency |f - k·fs|, k ≠ 0: the rate aliases it. */
-    FOLDS,
-    /** Not seen: the chain's filter (or the spectrum's floor) removed it. */
-    SUPPRESSED,
-    /** Lands within resolution of a stronger peak and cannot be told apart from it. */
-    MERGES,
+    SURVIVES("survives"),
+    /** Seen at the predicted apparent frequency |f − k·fs|, k ≠ 0: the rate aliases it. */
+    FOLDS("folds"),
+    /** Not seen, and the chain's predicted level at this rate lies below the detection floor: the chain removed it. */
+    REMOVED("removed"),
+    /** Not seen: nothing attenuated it much, but its own level lies below this rate's (folded) noise floor. */
+    BURIED("buried"),
+    /** Passes the chain above the floor but is not resolved beside a stronger peak (named, with the separation). */
+    HIDDEN("hidden"),
+    /** Lands on the same bin as another source peak's alias (or the other peak itself): two components in one. */
+    COINCIDES("coincides"),
+    /** Lands within two bins of 0 Hz, where the spectrum shows no peak. */
+    AT_DC("at-dc"),
+    /** Lands within two bins of the new Nyquist frequency fs/2, where the spectrum shows no peak. */
+    AT_NYQUIST("at-nyquist"),
+    /** Predicted above the floor, clear of other peaks, and still not seen: a real disagreement. */
+    MISSING("missing"),
     /** A peak at this rate that no source peak explains. */
-    UNEXPLAINED;
+    UNEXPLAINED("unexplained");
 
-    /** Lower-case name used in JSON and CSV. */
+    private final String key;
+
+    Verdict(String key) {
+        this.key = key;
+    }
+
+    /** Name used in JSON and CSV. */
     public String key() {
-        return name().toLowerCase(java.util.Locale.ROOT);
+        return key;
+    }
+
+    /** True for the verdicts of a component that is present in the re-sampled signal (seen or not). */
+    public boolean present() {
+        return this != REMOVED && this != BURIED;
     }
 }

@@ -1,6 +1,6 @@
 /**
  * Stepped-rate simulation: re-sample a stored high-rate recording at a ladder of lower rates and tell,
- * per spectral peak, whether it survives, folds (and where), is suppressed or merges.
+ * per spectral peak, what happens to it, with the reason in words.
  *
  * <h2>Pieces</h2>
  * <ul>
@@ -19,18 +19,21 @@
  * <h2>JSON layout ({@code format = "foldbook-sweep"}, {@code version = 1})</h2>
  * <pre>
  * { "format", "version", "mode",
- *   "source": { "rate", "samples", "binWidth", "peaks": [ { "id", "frequency", "levelDb" } ] },
+ *   "source": { "rate", "samples", "binWidth", "peaks": [ { "id", "frequency", "levelDb" } ],
+ *               "summarised": { "count", "belowDb", "highestDb" }, "peakRule" },
  *   "accuracy": { "upToHz" or "upToRateFraction", "levelDb", "statement" },
  *   "warnings": [ { "fromHz", "toHz", "uncertaintyDb" (null: content may be missing), "text" } ],
  *   "rates": [ { "index", "up", "down", "rate", "samples", "binWidth",
- *                "peaks":   [ { "frequency", "levelDb", "verdict", "sourcePeak" (id or null), "gainDb" } ],
+ *                "peaks":   [ { "frequency", "levelDb", "verdict", "sourcePeak" (id or null), "gainDb", "reason" } ],
  *                "sources": [ { "sourcePeak", "verdict", "apparentFrequency", "observedFrequency", "gainDb",
- *                               "mergedInto" (only for merges) } ] } ],
+ *                               "predictedGainDb", "floorDb", "otherPeak", "otherFrequency", "neededSegment"
+ *                               (the last three only when they apply), "reason" } ] } ],
  *   "summary": { "peaks": [ { "sourcePeak", "frequency", "lowestTrueRate", "firstFoldRate" } ],
  *                "band": { "low", "high", "lowestAliasFreeRate" } (only when asked) } }
  * </pre>
  * Frequencies in Hz, rates in S/s, levels in dB re 1 unit²/Hz (PSD density), gains in dB of power per bin
- * relative to the source peak; verdicts are {@code survives, folds, suppressed, merges, unexplained}; a
+ * relative to the source peak; verdicts are {@code survives, folds, removed, buried, hidden, coincides, at-dc,
+ * at-nyquist, missing, unexplained} (see {@link org.foldbook.sweep.Verdict}); a
  * number JSON cannot hold (NaN: not seen, never) is {@code null}.
  */
 package org.foldbook.sweep;

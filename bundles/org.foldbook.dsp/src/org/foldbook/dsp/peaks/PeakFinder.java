@@ -19,7 +19,8 @@ import org.foldbook.dsp.window.Window;
  * <li>local maxima ({@code find_peaks}' definition: strictly higher than both neighbours, a flat top counts
  * once at its middle; bin 0 and the last bin are never peaks);</li>
  * <li>optional: level at least {@code aboveFloorDb} over a running-median noise floor
- * ({@link NoiseFloor#runningMedian}), the analogue of {@code find_peaks}' {@code height};</li>
+ * ({@link NoiseFloor#runningMedian}) and over a fixed level (e.g. a quantiser's noise density), the
+ * analogue of {@code find_peaks}' {@code height};</li>
  * <li>minimum separation in bins ({@code find_peaks}' {@code distance}: higher peaks win);</li>
  * <li>prominence {@code >= prominenceDb} ({@code find_peaks}' {@code prominence}, computed over the whole
  * spectrum).</li>
@@ -33,6 +34,7 @@ public final class PeakFinder {
     private final int minSeparationBins;
     private final int floorWindowBins; // 0: no floor
     private final double aboveFloorDb;
+    private final double minimumLevelDb; // -inf: none
     private final SubBin subBin;
     private final KernelRatio kernel; // for WINDOW_KERNEL
 
@@ -41,6 +43,7 @@ public final class PeakFinder {
         this.minSeparationBins = b.minSeparationBins;
         this.floorWindowBins = b.floorWindowBins;
         this.aboveFloorDb = b.aboveFloorDb;
+        this.minimumLevelDb = b.minimumLevelDb;
         this.subBin = b.subBin;
         this.kernel = b.subBin == SubBin.WINDOW_KERNEL ? new KernelRatio(b.window) : null;
     }
@@ -91,6 +94,13 @@ public final class PeakFinder {
         if (floorWindowBins > 0) {
             floor = NoiseFloor.runningMedian(levelsDb, count, floorWindowBins);
             peaks = keep(peaks, floorMask(levelsDb, floor, peaks));
+        }
+        if (minimumLevelDb > Double.NEGATIVE_INFINITY) {
+            boolean[] high = new boolean[peaks.length];
+            for (int p = 0; p < peaks.length; p++) {
+                high[p] = levelsDb[peaks[p]] >= minimumLevelDb;
+            }
+            peaks = keep(peaks, high);
         }
         peaks = keep(peaks, PeakShapes.selectByDistance(levelsDb, peaks, minSeparationBins));
         double[] prom = PeakShapes.prominences(levelsDb, count, peaks, null, null);
@@ -215,6 +225,7 @@ public final class PeakFinder {
         private int minSeparationBins = 1;
         private int floorWindowBins;
         private double aboveFloorDb;
+        private double minimumLevelDb = Double.NEGATIVE_INFINITY;
         private SubBin subBin = SubBin.NONE;
         private Window window;
 
@@ -244,6 +255,15 @@ public final class PeakFinder {
             }
             this.floorWindowBins = windowBins;
             this.aboveFloorDb = Check.finite("aboveDb", aboveDb);
+            return this;
+        }
+
+        /** Keep only peaks whose bin level is at least {@code levelDb} (finite, or −∞ for no such rule). */
+        public Builder minimumLevelDb(double levelDb) {
+            if (Double.isNaN(levelDb) || levelDb == Double.POSITIVE_INFINITY) {
+                throw new IllegalArgumentException("levelDb must be finite or -infinity, was " + levelDb);
+            }
+            this.minimumLevelDb = levelDb;
             return this;
         }
 

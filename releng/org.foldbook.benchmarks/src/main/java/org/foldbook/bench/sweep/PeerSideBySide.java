@@ -37,7 +37,7 @@ import org.foldbook.sweep.SweepResult;
  *   --peer ../shared/peer/peer_sweep.py --signal rec1e6.f64 --grid grid.txt --details details.json \
  *   --mode a --threads 1 --sweeps 5 --warmup 2 [--max-attempts 15]
  * </pre>
- * Prints one JSON line. Mode a = Java bare, b = Java polyphase-default; --threads N pairs with the peer's --jobs N.
+ * Prints one JSON line. Mode a = Java bare-kernel (the kernel alone, as the peer), b = Java polyphase-default; --threads N pairs with the peer's --jobs N.
  */
 public final class PeerSideBySide {
     private PeerSideBySide() {
@@ -81,7 +81,7 @@ public final class PeerSideBySide {
         try (Reader r = Files.newBufferedReader(grid)) {
             ladder = RateLadder.readGrid(r, grid.toString(), fs0);
         }
-        Resampling java = mode.equals("a") ? Resampling.bare() : Resampling.polyphaseDefault();
+        Resampling java = mode.equals("a") ? Resampling.bareKernel() : Resampling.polyphaseDefault();
         StringBuilder out = new StringBuilder();
         out.append(String.format(Locale.ROOT, "{\"samples\":%d,\"rates\":%d,\"mode\":\"%s\",\"java\":\"%s\",\"threads\":%d",
                 x.length, ladder.size(), mode, java.name(), threads));

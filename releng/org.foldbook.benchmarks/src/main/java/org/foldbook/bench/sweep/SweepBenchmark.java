@@ -42,7 +42,7 @@ public class SweepBenchmark {
     @Param({"1000000"})
     public int samples;
 
-    @Param({"bare", "polyphase-default", "ideal", "modelled"})
+    @Param({"bare-kernel", "bare", "polyphase-default", "ideal", "modelled"})
     public String mode;
 
     @Param({"1", "2"})
@@ -60,6 +60,7 @@ public class SweepBenchmark {
         copy = new double[samples];
         ladder = RateLadder.geometric(FS0, FS0, 2000, 100, 1000);
         resampling = switch (mode) {
+            case "bare-kernel" -> Resampling.bareKernel();
             case "bare" -> Resampling.bare();
             case "polyphase-default" -> Resampling.polyphaseDefault();
             case "ideal" -> Resampling.idealDecimator();
