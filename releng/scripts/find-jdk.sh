@@ -2,7 +2,11 @@
 # Order: $JAVA_HOME if it is new enough, else the newest JDK under /usr/lib/jvm that is.
 # The build (Tycho 5) and the product both need Java 21+; Java 17 is not enough.
 foldbook_java_major() {
-    "$1/bin/java" -XshowSettings:properties -version 2>&1 | sed -n 's/^ *java.specification.version = //p' | head -n 1
+    # the JDK's release file when it has one (no JVM start: this runs before every command), else ask java
+    local v=""
+    [ -f "$1/release" ] && v=$(sed -n 's/^JAVA_VERSION="\([0-9]*\).*/\1/p' "$1/release" | head -n 1)
+    [ -n "$v" ] || v=$("$1/bin/java" -XshowSettings:properties -version 2>&1 | sed -n 's/^ *java.specification.version = //p' | head -n 1)
+    echo "$v"
 }
 FOLDBOOK_JAVA_HOME=""
 if [ -n "${JAVA_HOME:-}" ] && [ -x "$JAVA_HOME/bin/java" ] && [ "$(foldbook_java_major "$JAVA_HOME")" -ge 21 ] 2>/dev/null; then

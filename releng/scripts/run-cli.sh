@@ -4,7 +4,11 @@
 # target platform pins (no second list of jar versions here). Builds the product when it is missing or
 # older than a source file of a Foldbook bundle.
 # Heap: FOLDBOOK_HEAP (e.g. 6g) sets -Xmx; by default it is sized from an --input file (the channel in
-# memory, plus one filtered copy in the modelled mode); --stream needs little.
+# memory, plus one filtered copy in the modelled mode); with --stream 256 MB.
+# Quick start: an ahead-of-time cache of the classes the command loads and links and of the method
+# profiles of its run (JDK 25: -XX:AOTCacheOutput writes it at the end of the first run, -XX:AOTCache uses
+# it; older JDKs: a dynamic class-data-sharing archive), kept per JDK and product under ~/.cache/foldbook
+# and rebuilt when a plug-in jar is newer. FOLDBOOK_AOT=0 turns it off.
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
 source "$here/releng/scripts/find-jdk.sh"
@@ -31,7 +35,11 @@ if [ -z "$heap" ]; then
         prev="$a"
     done
     mb=1024
-    if [ -n "$input" ] && [ -f "$input" ]; then
+    stream=0
+    for a in "$@"; do [ "$a" = "--stream" ] && stream=1; done
+    if [ "$stream" = 1 ]; then
+        mb=256   # blocks x rates, not the recording: about 0.5 MB a rate
+    elif [ -n "$input" ] && [ -f "$input" ]; then
         size=$(stat -c %s "$input")
         # worst case 16-bit samples: 4 bytes in, 8 bytes per double; two arrays (modelled mode)
         mb=$(( 1024 + size * 8 / 1048576 ))
@@ -40,4 +48,29 @@ if [ -z "$heap" ]; then
     [ "$mb" -gt "$cap" ] && mb="$cap"
     heap="${mb}m"
 fi
-exec "$FOLDBOOK_JAVA" -Xmx"$heap" -Djava.awt.headless=true -cp "$product/plugins/*" org.foldbook.cli.Main "$@"
+java_args=(-Xmx"$heap" -Djava.awt.headless=true -cp "$product/plugins/*")
+cache_dir="${XDG_CACHE_HOME:-$HOME/.cache}/foldbook"
+if [ "${FOLDBOOK_AOT:-1}" != 0 ] && mkdir -p "$cache_dir" 2>/dev/null && [ -w "$cache_dir" ]; then
+    key=$(printf '%s\n%s\n' "$FOLDBOOK_JAVA_HOME" "$product" | sha256sum | cut -c1-16)
+    if [ "$(foldbook_java_major "$FOLDBOOK_JAVA_HOME")" -ge 25 ] 2>/dev/null; then
+        cache="$cache_dir/cli-$key.aot"
+        if [ -f "$cache" ] && [ -n "$(find "$product/plugins" -newer "$cache" -name '*.jar' 2>/dev/null | head -n 1)" ]; then
+            rm -f "$cache"
+        fi
+        if [ -f "$cache" ]; then
+            exec "$FOLDBOOK_JAVA" -XX:AOTCache="$cache" "${java_args[@]}" org.foldbook.cli.Main "$@"
+        fi
+        # first run: trains and writes its own file (two first runs at once do not collide), then moves
+        # it into place; the JVM's notes about it go to standard error
+        tmp="$cache.$$.tmp"
+        status=0
+        "$FOLDBOOK_JAVA" -XX:AOTCacheOutput="$tmp" -XX:+DisplayVMOutputToStderr -Xlog:aot=off -Xlog:cds=off "${java_args[@]}" \
+            org.foldbook.cli.Main "$@" || status=$?
+        [ "$status" = 0 ] && [ -s "$tmp" ] && mv -f "$tmp" "$cache"
+        rm -f "$tmp" "$tmp.config"
+        exit "$status"
+    fi
+    exec "$FOLDBOOK_JAVA" -XX:SharedArchiveFile="$cache_dir/cli-$key.jsa" -XX:+AutoCreateSharedArchive \
+        -Xlog:cds=off "${java_args[@]}" org.foldbook.cli.Main "$@"
+fi
+exec "$FOLDBOOK_JAVA" "${java_args[@]}" org.foldbook.cli.Main "$@"
