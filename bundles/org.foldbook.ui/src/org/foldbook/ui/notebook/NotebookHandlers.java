@@ -1,6 +1,5 @@
 package org.foldbook.ui.notebook;
 
-import java.io.IOException;
 import java.nio.file.Path;
 
 import org.eclipse.e4.core.di.annotations.CanExecute;
@@ -12,6 +11,7 @@ import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.FileDialog;
 import org.eclipse.swt.widgets.Shell;
+import org.foldbook.model.persistence.NotebookSaving;
 import org.foldbook.model.persistence.NotebookStore;
 
 import jakarta.inject.Named;
@@ -61,12 +61,11 @@ public final class NotebookHandlers {
         @Execute
         public void execute(@Named(IServiceConstants.ACTIVE_SHELL) Shell shell, CurrentNotebook current) {
             NotebookDocument document = current.document();
-            try {
-                document.save();
+            NotebookSaving.Outcome outcome = NotebookSaving.save(document.file(), document::save);
+            if (outcome.saved()) {
                 current.saved();
-            } catch (IOException | RuntimeException e) {
-                MessageDialog.openError(shell, "Cannot save the notebook", document.file() + ": " + e.getMessage()
-                        + "\n\nThe file on disk is unchanged; your changes are still open here.");
+            } else {
+                MessageDialog.openError(shell, NotebookSaving.FAILURE_TITLE, outcome.message());
             }
         }
     }

@@ -18,6 +18,7 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Label;
 import org.foldbook.model.SignalChain;
+import org.foldbook.model.persistence.NotebookSaving;
 
 import jakarta.annotation.PostConstruct;
 import jakarta.annotation.PreDestroy;
@@ -206,11 +207,10 @@ public class NotebookPart {
         if (document == null || !document.isDirty()) {
             return;
         }
-        try {
-            document.save();
-        } catch (java.io.IOException | RuntimeException e) {
-            org.eclipse.jface.dialogs.MessageDialog.openError(fileLabel.getShell(), "Cannot save the notebook",
-                    document.file() + ": " + e.getMessage() + "\n\nThe file on disk is unchanged.");
+        NotebookSaving.Outcome outcome = NotebookSaving.save(document.file(), document::save);
+        if (!outcome.saved()) {
+            org.eclipse.jface.dialogs.MessageDialog.openError(fileLabel.getShell(), NotebookSaving.FAILURE_TITLE,
+                    outcome.message());
         }
         if (current != null) {
             current.saved();
