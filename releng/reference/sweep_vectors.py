@@ -1,49 +1,79 @@
 #!/usr/bin/python3
 """sweep_vectors.py - reference vectors for the stepped-rate sweep tests.
 
-Runs the peer implementation (numpy/scipy; ../shared/peer/peer_sweep.py beside the repository, or the
-path in $PEER_SWEEP) on a small case and stores what the Java tests compare against:
+Runs Foldbook's own numpy/scipy reference pipeline (sweep_reference.py beside this script; the protocol is
+described there) on a small case and stores what the Java tests compare against:
 
-  peer_signal.f64    the peer's synthetic recording (tones + numpy PCG64 noise, seed 12345),
-                     raw little-endian float64, 100000 S/s  (clearly synthetic input)
-  peer_grid.txt      the peer's rate grid, 'index up down fs' lines (geomspace 100000..2000,
-                     limit_denominator(1000), duplicates dropped)
-  peer_details.json  per-rate peak lists of mode a (bare Kaiser-sinc sampler, W=16, beta=10) and
-                     mode b (scipy.signal.resample_poly defaults), Welch PSD + find_peaks (10 dB)
-  peer_run.json      the peer's one-line JSON summary (versions of numpy/scipy used, tone checks)
-  peer_grid_100.txt  the peer's default grid (100 rates, 100000..2000 S/s) for the ladder test
+  peer_signal.f64    the synthetic recording (tones + numpy PCG64 noise, seed 12345), raw little-endian
+                     float64, 100000 S/s, 16384 samples  (clearly synthetic input)
+  peer_grid.txt      the rate grid of 16 requested rates, 'index up down fs' lines
+  peer_details.json  per-rate peak lists of mode a (bare Kaiser-sinc sampler, W=16, beta=10) and mode b
+                     (scipy.signal.resample_poly defaults), Welch PSD + find_peaks (10 dB)
+  peer_run.json      what produced them (Python, numpy, scipy versions, parameters) and a tone check
+  peer_grid_100.txt  the default grid (100 requested rates, 100000..2000 S/s) for the ladder test
 
-Run with Debian's interpreter:  /usr/bin/python3 releng/reference/sweep_vectors.py
+("peer" in the file names: the reference the Java sweep is checked against, side by side.)
+Needs only Debian's python3-numpy and python3-scipy; nothing outside the repository.
+Run from anywhere:  /usr/bin/python3 releng/reference/sweep_vectors.py
 """
+import json
 import os
-import subprocess
+import platform
 import sys
 
+import numpy as np
+import scipy
+
 HERE = os.path.dirname(os.path.abspath(__file__))
+sys.path.insert(0, HERE)
+import sweep_reference as ref  # noqa: E402  (beside this script)
+
 REPO = os.path.dirname(os.path.dirname(HERE))
 OUT = os.path.join(REPO, "bundles", "org.foldbook.sweep.tests", "resources", "reference", "sweep")
-PEER = os.environ.get("PEER_SWEEP",
-                      os.path.join(os.path.dirname(REPO), "shared", "peer", "peer_sweep.py"))
 
 SAMPLES = 16384
 RATES = 16
 
 
+def write_grid(path, grid):
+    with open(path, "w", encoding="ascii", newline="\n") as fh:
+        for index, up, down, fs in grid:
+            fh.write("%d %d %d %.9f\n" % (index, up, down, fs))
+
+
+def tone_check(details, bare):
+    """How many tone positions have a peak within 1.5 bins: every alias (bare), tones below 0.45 fs (filtered)."""
+    found = expected = 0
+    for rate in details:
+        fs, bin_hz = rate["fs"], rate["fs"] / rate["nperseg"]
+        for f, _, _ in ref.TONES:
+            where = abs(f - fs * round(f / fs)) if bare else (f if f < 0.45 * fs else None)
+            if where is None:
+                continue
+            expected += 1
+            found += any(abs(p - where) <= 1.5 * bin_hz for p in rate["freqs"])
+    return {"found": found, "expected": expected}
+
+
 def main():
-    if not os.path.exists(PEER):
-        sys.exit("peer script not found at %s (set PEER_SWEEP)" % PEER)
     os.makedirs(OUT, exist_ok=True)
-    cmd = ["/usr/bin/python3", PEER, "--samples", str(SAMPLES), "--rates", str(RATES),
-           "--mode", "both", "--repeat", "1",
-           "--write-signal", os.path.join(OUT, "peer_signal.f64"),
-           "--write-grid", os.path.join(OUT, "peer_grid.txt"),
-           "--details", os.path.join(OUT, "peer_details.json")]
-    run = subprocess.run(cmd, check=True, capture_output=True, text=True)
-    with open(os.path.join(OUT, "peer_run.json"), "w") as fh:
-        fh.write(run.stdout)
-    subprocess.run(["/usr/bin/python3", PEER, "--samples", "4096", "--rates", "100", "--mode", "a",
-                    "--repeat", "1", "--write-grid", os.path.join(OUT, "peer_grid_100.txt")],
-                   check=True, capture_output=True)
+    x = ref.recording(SAMPLES)
+    np.ascontiguousarray(x, dtype="<f8").tofile(os.path.join(OUT, "peer_signal.f64"))
+    grid = ref.rate_grid(RATES)
+    write_grid(os.path.join(OUT, "peer_grid.txt"), grid)
+    details = {"a": ref.sweep(x, grid, ref.bare_sampler), "b": ref.sweep(x, grid, ref.filtered_resampler)}
+    with open(os.path.join(OUT, "peer_details.json"), "w", encoding="ascii", newline="\n") as fh:
+        json.dump(details, fh)
+    run = {"tool": "releng/reference/sweep_vectors.py",
+           "host": {"python": platform.python_version(), "numpy": np.__version__, "scipy": scipy.__version__},
+           "params": {"samples": SAMPLES, "fs0": ref.FS0, "seed": ref.SEED, "rates": RATES, "max_den": ref.MAX_DEN,
+                      "half_taps": ref.HALF_TAPS, "kaiser_beta": ref.KAISER_BETA, "nperseg": ref.NPERSEG,
+                      "prominence_db": ref.PROMINENCE_DB},
+           "tone_check": {"a": tone_check(details["a"], True), "b": tone_check(details["b"], False)}}
+    with open(os.path.join(OUT, "peer_run.json"), "w", encoding="ascii", newline="\n") as fh:
+        json.dump(run, fh)
+        fh.write("\n")
+    write_grid(os.path.join(OUT, "peer_grid_100.txt"), ref.rate_grid(100))
     print("wrote", OUT)
 
 
