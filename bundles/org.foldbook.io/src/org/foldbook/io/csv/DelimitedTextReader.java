@@ -48,21 +48,21 @@ public final class DelimitedTextReader implements RecordingReader {
     private final DelimitedTextSettings settings;
     private final RowFormat format;
     private final double timeFactor;
-    private final long firstDataLine;
+    private final boolean header;
     private final String sha256;
     private final int[] dataColumns;
-    private LineSource second;
+    private CsvRows second;
     private double[] row;
     private long framePosition;
 
     private DelimitedTextReader(RecordingInfo info, FileChannel channel, DelimitedTextSettings settings,
-            RowFormat format, double timeFactor, long firstDataLine, String sha256) {
+            RowFormat format, double timeFactor, boolean header, String sha256) {
         this.info = info;
         this.channel = channel;
         this.settings = settings;
         this.format = format;
         this.timeFactor = timeFactor;
-        this.firstDataLine = firstDataLine;
+        this.header = header;
         this.sha256 = sha256;
         this.dataColumns = new int[info.channelCount()];
         for (int c = 0, k = 0; c < format.columns; c++) {
@@ -107,7 +107,9 @@ public final class DelimitedTextReader implements RecordingReader {
         return new LineSource(file, in, s.charset());
     }
 
-    private static String nextContent(LineSource src) throws IOException {
+    /** The first line that is neither blank nor a comment (for separator detection), or null. */
+    private static String firstContentLine(Path file, FileChannel ch, DelimitedTextSettings s) throws IOException {
+        LineSource src = lines(file, ch, s, null);
         String line;
         while ((line = src.next()) != null) {
             if (src.lineNumber() == 1 && !line.isEmpty() && line.charAt(0) == '\uFEFF') {
@@ -121,18 +123,43 @@ public final class DelimitedTextReader implements RecordingReader {
         return null;
     }
 
+    /**
+     * Separator: as given, else tab if the first content line holds one outside quotes, else ';' likewise,
+     * else ','. Outside quotes, because a quoted header cell such as "x; filtered" names a column.
+     */
+    static char separatorOf(DelimitedTextSettings s, String first) {
+        if (s.separator() != null) {
+            return s.separator();
+        }
+        boolean quoted = false;
+        boolean tab = false;
+        boolean semicolon = false;
+        for (int i = 0; i < first.length(); i++) {
+            char c = first.charAt(i);
+            if (c == '"') {
+                quoted = !quoted; // a doubled quote toggles twice: still inside
+            } else if (!quoted) {
+                tab |= c == '\t';
+                semicolon |= c == ';';
+            }
+        }
+        return tab ? '\t' : semicolon ? ';' : ',';
+    }
+
     private static DelimitedTextReader scan(Path file, FileChannel ch, DelimitedTextSettings s, ReadOptions options)
             throws IOException {
-        MessageDigest md = options.sha256() ? Sha256.newDigest() : null;
-        LineSource src = lines(file, ch, s, md);
-        String first = nextContent(src);
-        if (first == null) {
-            throw RecordingFormatException.atLine(file, Math.max(1, src.lineNumber()), 1, "no rows: the file is empty");
+        String firstText = firstContentLine(file, ch, s);
+        if (firstText == null) {
+            throw RecordingFormatException.atLine(file, 1, 1, "no rows: the file is empty");
         }
-        long firstLine = src.lineNumber();
-        char sep = s.separator() != null ? s.separator()
-                : first.indexOf('\t') >= 0 ? '\t' : first.indexOf(';') >= 0 ? ';' : ',';
-        String[] cells = RowFormat.split(first, sep);
+        char sep = separatorOf(s, firstText);
+        MessageDigest md = options.sha256() ? Sha256.newDigest() : null;
+        CsvRows src = new CsvRows(file, lines(file, ch, s, md), sep);
+        String[] cells = src.next();
+        if (cells == null) {
+            throw RecordingFormatException.atLine(file, 1, 1, "no rows: the file is empty");
+        }
+        long firstLine = src.line();
         boolean header = switch (s.header()) {
         case PRESENT -> true;
         case ABSENT -> false;
@@ -206,13 +233,13 @@ public final class DelimitedTextReader implements RecordingReader {
         long missing = 0;
         long firstDataLine = -1;
         long previousLine = -1;
-        String line = header ? nextContent(src) : first;
-        while (line != null) {
-            long ln = src.lineNumber();
+        String[] row = header ? src.next() : cells;
+        while (row != null) {
+            long ln = src.line();
             if (firstDataLine < 0) {
                 firstDataLine = ln;
             }
-            missing += format.parse(file, ln, line, values);
+            missing += format.parse(file, ln, row, values);
             if (timing != null) {
                 double t = values[timeColumn] * timeFactor;
                 if (!Double.isFinite(t)) {
@@ -227,8 +254,9 @@ public final class DelimitedTextReader implements RecordingReader {
             }
             previousLine = ln;
             rows++;
-            line = nextContent(src);
+            row = src.next();
         }
+        // the digest is complete only once the parser has read to the end (it did: next() gave null)
         if (rows == 0) {
             throw RecordingFormatException.atLine(file, firstLine, 1, "header but no data rows");
         }
@@ -259,7 +287,7 @@ public final class DelimitedTextReader implements RecordingReader {
                 SampleType.FLOAT64, "decimal text, decimal mark '" + format.decimal + "', separator "
                         + (sep == '\t' ? "tab" : "'" + sep + "'"),
                 Optional.ofNullable(report), missing);
-        return new DelimitedTextReader(info, ch, s, format, timeFactor, firstDataLine, digest);
+        return new DelimitedTextReader(info, ch, s, format, timeFactor, header, digest);
     }
 
     @Override
@@ -329,18 +357,16 @@ public final class DelimitedTextReader implements RecordingReader {
             return false;
         }
         if (second == null) {
-            second = lines(info.file(), channel, settings, null);
-            while (second.lineNumber() < firstDataLine - 1) {
-                if (second.next() == null) {
-                    throw changed(second.lineNumber());
-                }
+            second = new CsvRows(info.file(), lines(info.file(), channel, settings, null), format.separator);
+            if (header && second.next() == null) {
+                throw changed(1);
             }
         }
-        String line = nextContent(second);
-        if (line == null) {
-            throw changed(second.lineNumber());
+        String[] cells = second.next();
+        if (cells == null) {
+            throw changed(second.line());
         }
-        format.parse(info.file(), second.lineNumber(), line, row);
+        format.parse(info.file(), second.line(), cells, row);
         framePosition++;
         return true;
     }

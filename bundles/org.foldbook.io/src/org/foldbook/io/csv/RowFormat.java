@@ -4,7 +4,7 @@ import java.nio.file.Path;
 
 import org.foldbook.io.RecordingFormatException;
 
-/** Cell splitting and strict number parsing once separator, decimal mark and column count are known. */
+/** Strict number parsing of a row's cells once separator, decimal mark and column count are known. */
 final class RowFormat {
     final char separator;
     char decimal; // 0 while not yet decided (no cell has shown a decimal mark yet)
@@ -18,25 +18,12 @@ final class RowFormat {
         this.timeColumn = timeColumn;
     }
 
-    static String[] split(String line, char separator) {
-        String[] cells = line.split(java.util.regex.Pattern.quote(String.valueOf(separator)), -1);
-        for (int i = 0; i < cells.length; i++) {
-            String s = cells[i].trim();
-            if (s.length() >= 2 && s.charAt(0) == '"' && s.charAt(s.length() - 1) == '"') {
-                s = s.substring(1, s.length() - 1).trim();
-            }
-            cells[i] = s;
-        }
-        return cells;
-    }
-
     /**
      * Parses one data row into {@code out} (length {@link #columns}); missing cells become NaN.
      *
      * @return the number of missing data cells
      */
-    int parse(Path file, long line, String text, double[] out) throws RecordingFormatException {
-        String[] cells = split(text, separator);
+    int parse(Path file, long line, String[] cells, double[] out) throws RecordingFormatException {
         if (cells.length > columns) {
             throw RecordingFormatException.atLine(file, line, columns + 1,
                     "row has " + cells.length + " cells, but the recording has " + columns + " columns");
