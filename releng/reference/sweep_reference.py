@@ -103,3 +103,24 @@ def sweep(x, grid, resampler):
         out.append({"index": index, "up": up, "down": down, "fs": fs, "n_out": int(y.size),
                     "nperseg": nperseg, "freqs": freqs, "levels_db": levels})
     return out
+
+
+def sampler_error_db(fraction, up=443, down=575, n=16384):
+    """Largest error of the bare sampler on a pure tone at fraction*fs0, dB re the tone (edges left out)."""
+    f = fraction * FS0
+    x = np.sin(2 * np.pi * f * np.arange(n) / FS0 + 0.3)
+    y = bare_sampler(x, up, down)
+    exact = np.sin(2 * np.pi * f * (np.arange(y.size) * down / up) / FS0 + 0.3)
+    inner = slice(2 * HALF_TAPS, y.size - 2 * HALF_TAPS)
+    return float(20 * np.log10(np.max(np.abs(y[inner] - exact[inner]))))
+
+
+if __name__ == "__main__":
+    # the figures docs/REFERENCES.md quotes for this pipeline
+    default = rate_grid(100)
+    whole = [(u, d) for _, u, d, _ in default if u == 1]
+    print("default grid: %d rates, integer ratios %s, up <= %d, down <= %d"
+          % (len(default), whole, max(u for _, u, _, _ in default), max(d for _, _, d, _ in default)))
+    for fraction in (0.1, 0.25, 0.39, 0.45):
+        print("bare sampler, tone at %.2f fs0, ratio 443/575: largest error %.1f dB"
+              % (fraction, sampler_error_db(fraction)))

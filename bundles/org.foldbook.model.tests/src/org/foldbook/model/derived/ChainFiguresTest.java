@@ -35,11 +35,11 @@ class ChainFiguresTest {
     @Test
     @DisplayName("folded band: 20 kS/s, content to 40 kHz lands in 0–10 kHz; to 15 kHz in 5–10 kHz; to 9 kHz nothing")
     void foldedBand() {
-        // REFERENCES.md trade fact (common practice) and |f − k·fs| (Oppenheim & Schafer ch. 4)
+        // docs/REFERENCES.md, facts of the trade (common practice), and |f − k·fs| (Oppenheim & Schafer ch. 4)
         assertEquals(new Band(0.0, 10000.0), ChainFigures.foldedBandHz(40000.0, 20000.0).orElseThrow());
         assertEquals(new Band(5000.0, 10000.0), ChainFigures.foldedBandHz(15000.0, 20000.0).orElseThrow());
         assertTrue(ChainFigures.foldedBandHz(9000.0, 20000.0).isEmpty());
-        // "A 1.5 Hz tone sampled at 1.9 Hz appears at 0.4 Hz" (REFERENCES.md, common practice)
+        // "A 1.5 Hz tone sampled at 1.9 Hz appears at 0.4 Hz" (docs/REFERENCES.md, facts of the trade; common practice)
         assertEquals(0.4, ChainFigures.foldedBandHz(1.5, 1.9).orElseThrow().lowHz(), 1e-12);
     }
 

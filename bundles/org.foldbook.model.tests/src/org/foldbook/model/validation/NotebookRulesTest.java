@@ -127,7 +127,7 @@ class NotebookRulesTest {
     }
 
     @Test
-    @DisplayName("no filter, sensor flat to 40 kHz at 20 kS/s: warns that 10–40 kHz folds into 0–10 kHz (REFERENCES, common practice)")
+    @DisplayName("no filter, sensor flat to 40 kHz at 20 kS/s: warns that 10–40 kHz folds into 0–10 kHz (docs/REFERENCES.md, common practice)")
     void unprotectedSensorBand() {
         SignalChain chain = vibrationChain(notebook);
         Sensor sensor = (Sensor) chain.getStages().get(0).getDevice();

@@ -18,7 +18,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The fold explorer part in a real SWT shell (needs a display; the test command provides Xvfb).
- * Check values are fold facts of common practice (see REFERENCES.md): a 1.5 Hz tone sampled at
+ * Check values are fold facts of common practice (docs/REFERENCES.md): a 1.5 Hz tone sampled at
  * 1.9 S/s appears at 0.4 Hz, and 27.1 kHz
  * at 48 kS/s appears at 48 − 27.1 = 20.9 kHz.
  */
