@@ -18,9 +18,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import org.foldbook.dsp.Check;
 import org.foldbook.dsp.peaks.NoiseFloor;
 import org.foldbook.dsp.peaks.SpectralPeak;
-import org.foldbook.dsp.resample.BareSampler;
-import org.foldbook.dsp.resample.KaiserPolyphaseResampler;
-import org.foldbook.dsp.resample.ModelledChannelResampler;
+import org.foldbook.dsp.resample.RandomAccessResampler;
 import org.foldbook.dsp.resample.ResampleRun;
 import org.foldbook.dsp.resample.Resampler;
 import org.foldbook.dsp.spectrum.Welch;
@@ -150,15 +148,7 @@ public final class SweepEngine implements AutoCloseable {
         int seg = settings.segmentFor(m);
         Welch welch = welchBySegment.computeIfAbsent(seg, s -> Welch.builder(s).build());
         ws.welch.reset(welch, fs);
-        RandomAccess direct = null;
-        if (resampler instanceof BareSampler bare) {
-            direct = bare::evaluate;
-        } else if (resampler instanceof KaiserPolyphaseResampler poly) {
-            direct = poly::evaluate;
-        } else if (resampler instanceof ModelledChannelResampler mc && mc.takesPrepared()) {
-            direct = mc::evaluate;
-        }
-        if (direct != null) {
+        if (resampler instanceof RandomAccessResampler direct && direct.offersRandomAccess()) {
             // random access straight from the shared array into the Welch buffer: no copy of input or output
             for (long first = 0; first < m; ) {
                 if (progress.isCancelled()) {
@@ -194,12 +184,6 @@ public final class SweepEngine implements AutoCloseable {
         }
         int w = Math.min(settings.threshold().floorWindowBins(), bins % 2 == 1 ? bins : bins - 1);
         return NoiseFloor.runningMedian(db, bins, Math.max(1, w));
-    }
-
-    /** Re-samplers that can compute any range of outputs from the whole input (no streaming state). */
-    @FunctionalInterface
-    private interface RandomAccess {
-        void evaluate(double[] samples, long first, double[] out, int outOffset, int count);
     }
 
     /** Per-thread buffers, reused from rate to rate. */

@@ -25,7 +25,7 @@ import org.foldbook.dsp.Check;
  * <p>Immutable and thread-safe: the phase table (up rows × 32) is built once; runs allocate nothing
  * per sample.
  */
-public final class BareSampler implements Resampler {
+public final class BareSampler implements RandomAccessResampler {
 
     /** Default half width W of the interpolation kernel (input samples). */
     public static final int DEFAULT_HALF_WIDTH = 16;
@@ -120,6 +120,7 @@ public final class BareSampler implements Resampler {
      * @throws IllegalArgumentException if the output range is outside [0, outputLength) or the target
      *         slice outside {@code out}
      */
+    @Override
     public void evaluate(double[] samples, long first, double[] out, int outOffset, int count) {
         if (samples == null) {
             throw new IllegalArgumentException("samples must not be null");

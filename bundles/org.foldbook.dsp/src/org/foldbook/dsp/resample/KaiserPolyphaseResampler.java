@@ -21,7 +21,7 @@ import org.foldbook.dsp.Check;
  * and ≥ 100 dB stop band use {@link IdealDecimator}. Cost: about 20·N multiply-adds per pass whatever
  * the ratio. Immutable and thread-safe.
  */
-public final class KaiserPolyphaseResampler implements Resampler {
+public final class KaiserPolyphaseResampler implements RandomAccessResampler {
 
     private final RateRatio ratio;
     private final PolyphaseKernel kernel;   // null for 1/1 (a copy)
@@ -127,6 +127,7 @@ public final class KaiserPolyphaseResampler implements Resampler {
      * Outputs {@code first .. first+count-1} into {@code out[outOffset..]}, reading {@code samples} only
      * (random access, as {@link BareSampler#evaluate}); the input is not scanned for non-finite values.
      */
+    @Override
     public void evaluate(double[] samples, long first, double[] out, int outOffset, int count) {
         if (samples == null) {
             throw new IllegalArgumentException("samples must not be null");

@@ -26,7 +26,7 @@ import org.foldbook.dsp.Check;
  * series (a sweep filters the recording once for all rates), so {@link #outputLength} counts 2·fs0 inputs.
  * What cannot be honoured is stated in {@link #warnings()}. Immutable and thread-safe.
  */
-public final class ModelledChannelResampler implements Resampler {
+public final class ModelledChannelResampler implements RandomAccessResampler {
 
     /** Whether step 1 runs here or the caller has already run {@link ExactChainFilter} (once for all rates). */
     public enum AnalogStage {
@@ -169,6 +169,12 @@ public final class ModelledChannelResampler implements Resampler {
         return exact == null;
     }
 
+    /** Random access works on the prepared 2·fs0 series only. */
+    @Override
+    public boolean offersRandomAccess() {
+        return takesPrepared();
+    }
+
     /** Up to this frequency (0.49·fs0) the simulated chain is the modelled one (see {@link ExactChainFilter}). */
     public double exactUpToHz() {
         return ExactChainFilter.EXACT_UP_TO_FRACTION * sourceRate;
@@ -222,6 +228,7 @@ public final class ModelledChannelResampler implements Resampler {
      * Random access into the outputs from an {@link AnalogStage#ALREADY_APPLIED} 2·fs0 series (as
      * {@link BareSampler#evaluate}); outputs {@code first .. first+count-1} go to {@code out[outOffset..]}.
      */
+    @Override
     public void evaluate(double[] doubled, long first, double[] out, int outOffset, int count) {
         if (exact != null) {
             throw new IllegalStateException("evaluate needs the 2·fs0 series of AnalogStage.ALREADY_APPLIED");
