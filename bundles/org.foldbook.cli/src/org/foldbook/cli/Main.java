@@ -3,6 +3,8 @@ package org.foldbook.cli;
 import java.io.PrintStream;
 import java.util.Arrays;
 
+import org.foldbook.dsp.fft.RealFft;
+
 /**
  * Headless entry point: {@code Main <command> [options]}. Plain Java, no display; prints results to
  * standard output (or a file) and messages to standard error. Exit codes: 0 done, 2 bad arguments or
@@ -18,6 +20,8 @@ public final class Main {
     }
 
     public static void main(String[] args) {
+        // decided once for this front end: the sweep runs rates in parallel, so one transform = one thread
+        RealFft.configureThreads(1);
         System.exit(run(args, System.out, System.err));
     }
 

@@ -7,6 +7,8 @@ import org.eclipse.e4.ui.di.UISynchronize;
 import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.osgi.service.datalocation.Location;
 
+import org.foldbook.dsp.fft.RealFft;
+
 import jakarta.annotation.PostConstruct;
 
 /**
@@ -22,6 +24,8 @@ public class NotebookStartupAddon {
 
     @PostConstruct
     public void start(MApplication application, UISynchronize sync) {
+        // decided once for the workbench: parts run whole sweeps in parallel over rates, one thread per transform
+        RealFft.configureThreads(1);
         CurrentNotebook current = new CurrentNotebook();
         application.getContext().set(CurrentNotebook.class, current);
         Path requested = StartupArguments.notebookPath(Platform.getApplicationArgs());
