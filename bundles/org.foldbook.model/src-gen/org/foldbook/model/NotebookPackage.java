@@ -1054,13 +1054,31 @@ public interface NotebookPackage extends EPackage {
 	int STAGE__EXPOSURE_S = 5;
 
 	/**
+	 * The feature id for the '<em><b>Filmed Rotation Hz</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int STAGE__FILMED_ROTATION_HZ = 6;
+
+	/**
+	 * The feature id for the '<em><b>Filmed Marks Per Turn</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int STAGE__FILMED_MARKS_PER_TURN = 7;
+
+	/**
 	 * The number of structural features of the '<em>Stage</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int STAGE_FEATURE_COUNT = 6;
+	int STAGE_FEATURE_COUNT = 8;
 
 	/**
 	 * The number of operations of the '<em>Stage</em>' class.
@@ -2327,6 +2345,28 @@ public interface NotebookPackage extends EPackage {
 	EAttribute getStage_ExposureS();
 
 	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.Stage#getFilmedRotationHz <em>Filmed Rotation Hz</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Filmed Rotation Hz</em>'.
+	 * @see org.foldbook.model.Stage#getFilmedRotationHz()
+	 * @see #getStage()
+	 * @generated
+	 */
+	EAttribute getStage_FilmedRotationHz();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.foldbook.model.Stage#getFilmedMarksPerTurn <em>Filmed Marks Per Turn</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Filmed Marks Per Turn</em>'.
+	 * @see org.foldbook.model.Stage#getFilmedMarksPerTurn()
+	 * @see #getStage()
+	 * @generated
+	 */
+	EAttribute getStage_FilmedMarksPerTurn();
+
+	/**
 	 * Returns the meta object for class '{@link org.foldbook.model.Experiment <em>Experiment</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -3425,6 +3465,22 @@ public interface NotebookPackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute STAGE__EXPOSURE_S = eINSTANCE.getStage_ExposureS();
+
+		/**
+		 * The meta object literal for the '<em><b>Filmed Rotation Hz</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute STAGE__FILMED_ROTATION_HZ = eINSTANCE.getStage_FilmedRotationHz();
+
+		/**
+		 * The meta object literal for the '<em><b>Filmed Marks Per Turn</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute STAGE__FILMED_MARKS_PER_TURN = eINSTANCE.getStage_FilmedMarksPerTurn();
 
 		/**
 		 * The meta object literal for the '{@link org.foldbook.model.impl.ExperimentImpl <em>Experiment</em>}' class.

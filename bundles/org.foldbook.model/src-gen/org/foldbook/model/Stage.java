@@ -20,6 +20,8 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link org.foldbook.model.Stage#getRangeV <em>Range V</em>}</li>
  *   <li>{@link org.foldbook.model.Stage#getRateHz <em>Rate Hz</em>}</li>
  *   <li>{@link org.foldbook.model.Stage#getExposureS <em>Exposure S</em>}</li>
+ *   <li>{@link org.foldbook.model.Stage#getFilmedRotationHz <em>Filmed Rotation Hz</em>}</li>
+ *   <li>{@link org.foldbook.model.Stage#getFilmedMarksPerTurn <em>Filmed Marks Per Turn</em>}</li>
  * </ul>
  *
  * @see org.foldbook.model.NotebookPackage#getStage()
@@ -164,5 +166,55 @@ public interface Stage extends EObject {
 	 * @generated
 	 */
 	void setExposureS(Double value);
+
+	/**
+	 * Returns the value of the '<em><b>Filmed Rotation Hz</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Camera stage: rotation rate of the rotating or periodic part it films, in revolutions per second (negative: it turns the other way). Unset: no rotating part is described.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Filmed Rotation Hz</em>' attribute.
+	 * @see #setFilmedRotationHz(Double)
+	 * @see org.foldbook.model.NotebookPackage#getStage_FilmedRotationHz()
+	 * @model
+	 * @generated
+	 */
+	Double getFilmedRotationHz();
+
+	/**
+	 * Sets the value of the '{@link org.foldbook.model.Stage#getFilmedRotationHz <em>Filmed Rotation Hz</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Filmed Rotation Hz</em>' attribute.
+	 * @see #getFilmedRotationHz()
+	 * @generated
+	 */
+	void setFilmedRotationHz(Double value);
+
+	/**
+	 * Returns the value of the '<em><b>Filmed Marks Per Turn</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Camera stage: how many identical marks, blades or spokes the filmed part shows per revolution (the pattern repeats that often). Unset: 1.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Filmed Marks Per Turn</em>' attribute.
+	 * @see #setFilmedMarksPerTurn(Integer)
+	 * @see org.foldbook.model.NotebookPackage#getStage_FilmedMarksPerTurn()
+	 * @model
+	 * @generated
+	 */
+	Integer getFilmedMarksPerTurn();
+
+	/**
+	 * Sets the value of the '{@link org.foldbook.model.Stage#getFilmedMarksPerTurn <em>Filmed Marks Per Turn</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Filmed Marks Per Turn</em>' attribute.
+	 * @see #getFilmedMarksPerTurn()
+	 * @generated
+	 */
+	void setFilmedMarksPerTurn(Integer value);
 
 } // Stage

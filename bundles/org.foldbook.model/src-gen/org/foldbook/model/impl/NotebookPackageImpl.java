@@ -921,6 +921,26 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 	 * @generated
 	 */
 	@Override
+	public EAttribute getStage_FilmedRotationHz() {
+		return (EAttribute)stageEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getStage_FilmedMarksPerTurn() {
+		return (EAttribute)stageEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EClass getExperiment() {
 		return experimentEClass;
 	}
@@ -1509,6 +1529,8 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		createEAttribute(stageEClass, STAGE__RANGE_V);
 		createEAttribute(stageEClass, STAGE__RATE_HZ);
 		createEAttribute(stageEClass, STAGE__EXPOSURE_S);
+		createEAttribute(stageEClass, STAGE__FILMED_ROTATION_HZ);
+		createEAttribute(stageEClass, STAGE__FILMED_MARKS_PER_TURN);
 
 		experimentEClass = createEClass(EXPERIMENT);
 		createEAttribute(experimentEClass, EXPERIMENT__NAME);
@@ -1680,6 +1702,8 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		initEAttribute(getStage_RangeV(), ecorePackage.getEDoubleObject(), "rangeV", null, 0, 1, Stage.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getStage_RateHz(), ecorePackage.getEDoubleObject(), "rateHz", null, 0, 1, Stage.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getStage_ExposureS(), ecorePackage.getEDoubleObject(), "exposureS", null, 0, 1, Stage.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getStage_FilmedRotationHz(), ecorePackage.getEDoubleObject(), "filmedRotationHz", null, 0, 1, Stage.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getStage_FilmedMarksPerTurn(), ecorePackage.getEIntegerObject(), "filmedMarksPerTurn", null, 0, 1, Stage.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(experimentEClass, Experiment.class, "Experiment", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getExperiment_Name(), ecorePackage.getEString(), "name", null, 0, 1, Experiment.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);

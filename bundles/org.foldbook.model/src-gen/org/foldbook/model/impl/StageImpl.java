@@ -29,6 +29,8 @@ import org.foldbook.model.Stage;
  *   <li>{@link org.foldbook.model.impl.StageImpl#getRangeV <em>Range V</em>}</li>
  *   <li>{@link org.foldbook.model.impl.StageImpl#getRateHz <em>Rate Hz</em>}</li>
  *   <li>{@link org.foldbook.model.impl.StageImpl#getExposureS <em>Exposure S</em>}</li>
+ *   <li>{@link org.foldbook.model.impl.StageImpl#getFilmedRotationHz <em>Filmed Rotation Hz</em>}</li>
+ *   <li>{@link org.foldbook.model.impl.StageImpl#getFilmedMarksPerTurn <em>Filmed Marks Per Turn</em>}</li>
  * </ul>
  *
  * @generated
@@ -143,6 +145,46 @@ public class StageImpl extends MinimalEObjectImpl.Container implements Stage {
 	 * @ordered
 	 */
 	protected Double exposureS = EXPOSURE_S_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getFilmedRotationHz() <em>Filmed Rotation Hz</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getFilmedRotationHz()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final Double FILMED_ROTATION_HZ_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getFilmedRotationHz() <em>Filmed Rotation Hz</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getFilmedRotationHz()
+	 * @generated
+	 * @ordered
+	 */
+	protected Double filmedRotationHz = FILMED_ROTATION_HZ_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getFilmedMarksPerTurn() <em>Filmed Marks Per Turn</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getFilmedMarksPerTurn()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final Integer FILMED_MARKS_PER_TURN_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getFilmedMarksPerTurn() <em>Filmed Marks Per Turn</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getFilmedMarksPerTurn()
+	 * @generated
+	 * @ordered
+	 */
+	protected Integer filmedMarksPerTurn = FILMED_MARKS_PER_TURN_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -324,6 +366,52 @@ public class StageImpl extends MinimalEObjectImpl.Container implements Stage {
 	 * @generated
 	 */
 	@Override
+	public Double getFilmedRotationHz() {
+		return filmedRotationHz;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setFilmedRotationHz(Double newFilmedRotationHz) {
+		Double oldFilmedRotationHz = filmedRotationHz;
+		filmedRotationHz = newFilmedRotationHz;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, NotebookPackage.STAGE__FILMED_ROTATION_HZ, oldFilmedRotationHz, filmedRotationHz));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Integer getFilmedMarksPerTurn() {
+		return filmedMarksPerTurn;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setFilmedMarksPerTurn(Integer newFilmedMarksPerTurn) {
+		Integer oldFilmedMarksPerTurn = filmedMarksPerTurn;
+		filmedMarksPerTurn = newFilmedMarksPerTurn;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, NotebookPackage.STAGE__FILMED_MARKS_PER_TURN, oldFilmedMarksPerTurn, filmedMarksPerTurn));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case NotebookPackage.STAGE__DEVICE:
@@ -339,6 +427,10 @@ public class StageImpl extends MinimalEObjectImpl.Container implements Stage {
 				return getRateHz();
 			case NotebookPackage.STAGE__EXPOSURE_S:
 				return getExposureS();
+			case NotebookPackage.STAGE__FILMED_ROTATION_HZ:
+				return getFilmedRotationHz();
+			case NotebookPackage.STAGE__FILMED_MARKS_PER_TURN:
+				return getFilmedMarksPerTurn();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -368,6 +460,12 @@ public class StageImpl extends MinimalEObjectImpl.Container implements Stage {
 				return;
 			case NotebookPackage.STAGE__EXPOSURE_S:
 				setExposureS((Double)newValue);
+				return;
+			case NotebookPackage.STAGE__FILMED_ROTATION_HZ:
+				setFilmedRotationHz((Double)newValue);
+				return;
+			case NotebookPackage.STAGE__FILMED_MARKS_PER_TURN:
+				setFilmedMarksPerTurn((Integer)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -399,6 +497,12 @@ public class StageImpl extends MinimalEObjectImpl.Container implements Stage {
 			case NotebookPackage.STAGE__EXPOSURE_S:
 				setExposureS(EXPOSURE_S_EDEFAULT);
 				return;
+			case NotebookPackage.STAGE__FILMED_ROTATION_HZ:
+				setFilmedRotationHz(FILMED_ROTATION_HZ_EDEFAULT);
+				return;
+			case NotebookPackage.STAGE__FILMED_MARKS_PER_TURN:
+				setFilmedMarksPerTurn(FILMED_MARKS_PER_TURN_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -423,6 +527,10 @@ public class StageImpl extends MinimalEObjectImpl.Container implements Stage {
 				return RATE_HZ_EDEFAULT == null ? rateHz != null : !RATE_HZ_EDEFAULT.equals(rateHz);
 			case NotebookPackage.STAGE__EXPOSURE_S:
 				return EXPOSURE_S_EDEFAULT == null ? exposureS != null : !EXPOSURE_S_EDEFAULT.equals(exposureS);
+			case NotebookPackage.STAGE__FILMED_ROTATION_HZ:
+				return FILMED_ROTATION_HZ_EDEFAULT == null ? filmedRotationHz != null : !FILMED_ROTATION_HZ_EDEFAULT.equals(filmedRotationHz);
+			case NotebookPackage.STAGE__FILMED_MARKS_PER_TURN:
+				return FILMED_MARKS_PER_TURN_EDEFAULT == null ? filmedMarksPerTurn != null : !FILMED_MARKS_PER_TURN_EDEFAULT.equals(filmedMarksPerTurn);
 		}
 		return super.eIsSet(featureID);
 	}
@@ -447,6 +555,10 @@ public class StageImpl extends MinimalEObjectImpl.Container implements Stage {
 		result.append(rateHz);
 		result.append(", exposureS: ");
 		result.append(exposureS);
+		result.append(", filmedRotationHz: ");
+		result.append(filmedRotationHz);
+		result.append(", filmedMarksPerTurn: ");
+		result.append(filmedMarksPerTurn);
 		result.append(')');
 		return result.toString();
 	}

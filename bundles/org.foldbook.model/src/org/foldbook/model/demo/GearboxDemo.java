@@ -208,6 +208,8 @@ public final class GearboxDemo {
         Stage frames = stage(camera);
         frames.setRateHz(FRAME_RATE_HZ);
         frames.setExposureS(0.0008);
+        frames.setFilmedRotationHz(SHAFT_HZ); // the output shaft, one painted mark
+        frames.setFilmedMarksPerTurn(1);
         shaftCamera.getStages().add(frames);
 
         rig.getChains().addAll(List.of(housing, bearing, sound, shaftCamera));

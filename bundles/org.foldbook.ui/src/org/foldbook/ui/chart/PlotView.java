@@ -28,6 +28,7 @@ public final class PlotView {
 
     private final Chart chart;
     private final List<Color> colours = new ArrayList<>();
+    private final List<Band> bands = new ArrayList<>();
     private int nextColour;
 
     public PlotView(Composite parent, String title, String xTitle, String yTitle) {
@@ -38,6 +39,44 @@ public final class PlotView {
         chart.setBackground(parent.getDisplay().getSystemColor(SWT.COLOR_WHITE));
         chart.getPlotArea().setBackground(parent.getDisplay().getSystemColor(SWT.COLOR_WHITE));
         chart.addDisposeListener(e -> colours.forEach(Color::dispose));
+        chart.getPlotArea().addCustomPaintListener(new org.eclipse.swtchart.ICustomPaintListener() {
+            @Override
+            public void paintControl(org.eclipse.swt.events.PaintEvent e) {
+                paintBands(e.gc);
+            }
+
+            @Override
+            public boolean drawBehindSeries() {
+                return true;
+            }
+        });
+    }
+
+    /** Shades the x interval [lowX, highX] over the plot's height, lightly, in palette colour {@code index}. */
+    public void addBand(double lowX, double highX, int index) {
+        bands.add(new Band(lowX, highX, palette(index)));
+    }
+
+    /** How many bands are shaded (tests). */
+    public int bandCount() {
+        return bands.size();
+    }
+
+    private record Band(double lowX, double highX, Color colour) {
+    }
+
+    private void paintBands(org.eclipse.swt.graphics.GC gc) {
+        IAxis xAxis = chart.getAxisSet().getXAxis(0);
+        int height = chart.getPlotArea().getSize().y;
+        int alpha = gc.getAlpha();
+        for (Band b : bands) {
+            int x0 = xAxis.getPixelCoordinate(b.lowX());
+            int x1 = xAxis.getPixelCoordinate(b.highX());
+            gc.setBackground(b.colour());
+            gc.setAlpha(45);
+            gc.fillRectangle(Math.min(x0, x1), 0, Math.abs(x1 - x0), height);
+        }
+        gc.setAlpha(alpha);
     }
 
     /** The SWT control, for layout data. */
@@ -50,6 +89,7 @@ public final class PlotView {
         for (var s : chart.getSeriesSet().getSeries()) {
             chart.getSeriesSet().deleteSeries(s.getId());
         }
+        bands.clear();
         nextColour = 0;
     }
 
@@ -58,12 +98,30 @@ public final class PlotView {
         line(name, x, y, LineStyle.SOLID, 2, palette(nextColour++));
     }
 
+    /** Adds a line in the palette colour {@code index} (two lines of one thing share a colour). */
+    public void addLine(String name, double[] x, double[] y, int index, int width) {
+        line(name, x, y, LineStyle.SOLID, width, palette(index));
+    }
+
+    /** Adds points without a line (marked peaks, frames), in palette colour {@code index}, each with its label. */
+    public void addPoints(String name, double[] x, double[] y, int index, String[] labels) {
+        Color colour = palette(index);
+        ILineSeries<?> s = line(name, x, y, LineStyle.NONE, 1, colour);
+        s.setSymbolType(PlotSymbolType.CIRCLE);
+        s.setSymbolColor(colour);
+        s.setSymbolSize(4);
+        if (labels != null) {
+            s.getLabel().setFormats(labels);
+            s.getLabel().setVisible(true);
+        }
+    }
+
     /** Adds a thin dashed reference line (a limit, a marker) in grey. */
     public void addMarker(String name, double[] x, double[] y) {
         line(name, x, y, LineStyle.DASH, 1, chart.getDisplay().getSystemColor(SWT.COLOR_DARK_GRAY));
     }
 
-    private void line(String name, double[] x, double[] y, LineStyle style, int width, Color colour) {
+    private ILineSeries<?> line(String name, double[] x, double[] y, LineStyle style, int width, Color colour) {
         if (x.length != y.length) {
             throw new IllegalArgumentException("line '" + name + "': " + x.length + " x values but " + y.length + " y values");
         }
@@ -75,6 +133,7 @@ public final class PlotView {
         series.setLineColor(colour);
         series.setSymbolType(PlotSymbolType.NONE);
         series.setAntialias(SWT.ON);
+        return series;
     }
 
     /** Fixes both axis ranges (null keeps the automatic range of that axis), then redraws. */
