@@ -124,7 +124,7 @@ class WalkthroughPartTest {
     @Test
     @DisplayName("camera chain: the mark turns forward at 1000 frames/s, backward at 25 frames/s; the animation runs")
     void cameraChain() {
-        Combo chains = (Combo) find(shell, Combo.class, c -> c.getItemCount() == 4);
+        Combo chains = (Combo) find(shell, Combo.class, c -> c.getItemCount() == 5);
         chains.select(3);
         chains.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
         click(button("Next ▶"));

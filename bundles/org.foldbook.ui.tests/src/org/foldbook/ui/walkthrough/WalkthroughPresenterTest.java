@@ -59,7 +59,8 @@ class WalkthroughPresenterTest {
 
         StagePage sensor = w.page(StagePage.Kind.SENSOR);
         assertEquals("1 Hz – 20 kHz", sensor.figure("Usable band"));
-        assertEquals("32 kHz, Q not given", sensor.figure("Mounted resonance"));
+        assertEquals("32 kHz, Q 25", sensor.figure("Mounted resonance"));
+        assertTrue(sensor.chart().isPresent()); // the modelled resonance
         assertEquals("32 kHz", sensor.figure("Front end passes up to")); // max(20 kHz, 32 kHz), under the 100 kHz edge
 
         StagePage amp = w.page(StagePage.Kind.CONDITIONER);
