@@ -12,7 +12,7 @@ import org.foldbook.dsp.fold.Folding;
 import org.foldbook.model.Channel;
 import org.foldbook.model.Notebook;
 import org.foldbook.model.SweepMode;
-import org.foldbook.model.demo.GearboxDemo;
+import org.foldbook.demo.GearboxDemo;
 import org.foldbook.model.persistence.NotebookStore;
 import org.foldbook.sweep.ObservedPeak;
 import org.foldbook.sweep.RateResult;

@@ -12,7 +12,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 
 import org.foldbook.dsp.fold.Folding;
-import org.foldbook.model.demo.GearboxDemo;
+import org.foldbook.demo.GearboxDemo;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;

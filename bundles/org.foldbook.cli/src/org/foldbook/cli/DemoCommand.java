@@ -9,7 +9,7 @@ import java.util.List;
 
 import org.foldbook.model.Experiment;
 import org.foldbook.model.Recording;
-import org.foldbook.model.demo.GearboxDemo;
+import org.foldbook.demo.GearboxDemo;
 
 /**
  * {@code foldbook demo DIR}: writes the demo notebook and its recordings into DIR, without a display.

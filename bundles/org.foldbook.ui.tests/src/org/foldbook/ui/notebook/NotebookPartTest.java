@@ -31,7 +31,7 @@ import org.eclipse.swtchart.Chart;
 import org.foldbook.model.Channel;
 import org.foldbook.model.Experiment;
 import org.foldbook.model.SignalChain;
-import org.foldbook.model.demo.GearboxDemo;
+import org.foldbook.demo.GearboxDemo;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.DisplayName;

@@ -1,4 +1,4 @@
-package org.foldbook.model.demo;
+package org.foldbook.demo;
 
 import java.util.List;
 
@@ -17,7 +17,7 @@ import org.foldbook.model.SignalChain;
 import org.foldbook.model.Stage;
 import org.foldbook.model.SweepMode;
 import org.foldbook.model.SweepPlan;
-import org.foldbook.model.demo.SyntheticTones.Tone;
+import org.foldbook.demo.SyntheticTones.Tone;
 
 /**
  * The demo's survey run (SYNTHETIC, invented like the rest of the demo): the housing accelerometer and

@@ -1,4 +1,4 @@
-package org.foldbook.model.demo;
+package org.foldbook.demo;
 
 import java.io.BufferedOutputStream;
 import java.io.IOException;

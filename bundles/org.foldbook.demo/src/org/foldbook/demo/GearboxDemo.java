@@ -1,4 +1,4 @@
-package org.foldbook.model.demo;
+package org.foldbook.demo;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -27,7 +27,7 @@ import org.foldbook.model.Sensor;
 import org.foldbook.model.SignalChain;
 import org.foldbook.model.Stage;
 import org.foldbook.model.derived.ChainFigures;
-import org.foldbook.model.demo.SyntheticTones.Tone;
+import org.foldbook.demo.SyntheticTones.Tone;
 import org.foldbook.model.persistence.NotebookStore;
 import org.foldbook.model.persistence.RecordingFiles;
 

@@ -1,4 +1,4 @@
-package org.foldbook.model.demo;
+package org.foldbook.demo;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
