@@ -23,7 +23,7 @@ import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swt.widgets.Text;
 import org.foldbook.model.derived.ChainFigures;
-import org.foldbook.model.demo.GearboxDemo;
+import org.foldbook.demo.GearboxDemo;
 import org.foldbook.ui.notebook.CurrentNotebook;
 import org.foldbook.ui.notebook.NotebookDocument;
 import org.junit.jupiter.api.AfterEach;

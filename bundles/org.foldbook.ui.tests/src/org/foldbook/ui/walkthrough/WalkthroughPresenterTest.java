@@ -13,7 +13,7 @@ import org.foldbook.dsp.fold.ApparentMotion;
 import org.foldbook.model.Notebook;
 import org.foldbook.model.Rig;
 import org.foldbook.model.SignalChain;
-import org.foldbook.model.demo.GearboxDemo;
+import org.foldbook.demo.GearboxDemo;
 import org.foldbook.model.derived.ChainFigures;
 import org.foldbook.model.derived.Quantities;
 import org.foldbook.model.edit.NotebookEditing;
