@@ -93,6 +93,51 @@ public final class ChannelReader {
         }
     }
 
+    /**
+     * Streams the channel once in blocks into {@code sink} (memory bounded by one block, any file size)
+     * and returns what the file says about itself. Unlike {@link #read} it does not stop when the file's
+     * rate, channel count or checksum disagree with the notebook, nor at non-finite samples: an audit
+     * reports those. A missing, unreadable or corrupt file, or a channel index the file lacks, is an
+     * error naming the file.
+     *
+     * @throws CancellationException when {@code progress} asked to stop
+     */
+    public static ChannelStream stream(Channel channel, ChannelStream.BlockSink sink, ReadProgress progress)
+            throws ChannelDataException {
+        Path file = fileOf(channel);
+        Recording recording = channel.getRecording();
+        if (!Files.isRegularFile(file)) {
+            throw new ChannelDataException(file, Files.exists(file) ? "not a regular file"
+                    : "missing (the notebook expects recording " + recording.getId() + " here)");
+        }
+        try (RecordingReader reader = open(file, recording)) {
+            RecordingInfo info = reader.info();
+            int index = channel.getChannelIndex();
+            if (index < 0 || index >= info.channelCount()) {
+                throw new ChannelDataException(file, "channel '" + channel.getName() + "' is index " + index
+                        + ", but the file holds " + info.channelCount() + " channel(s)");
+            }
+            double[][] bufs = new double[info.channelCount()][BLOCK];
+            long done = 0;
+            int got;
+            while ((got = reader.read(bufs, 0, BLOCK)) > 0) {
+                if (progress.cancelled()) {
+                    throw new CancellationException("reading " + file + " cancelled");
+                }
+                sink.accept(bufs[index], got);
+                done += got;
+                progress.framesRead(done, info.frameCount());
+            }
+            String logged = recording.getSha256() == null ? "" : recording.getSha256().toLowerCase(Locale.ROOT);
+            return new ChannelStream(file, info.sampleRate(), info.channelCount(), done, info.sampleType(),
+                    reader.sha256Hex().toLowerCase(Locale.ROOT), logged, info.channels().get(index).unit());
+        } catch (ChannelDataException | CancellationException e) {
+            throw e;
+        } catch (IOException | IllegalArgumentException e) {
+            throw new ChannelDataException(file, "cannot be read: " + e.getMessage(), e);
+        }
+    }
+
     /** Opens by content; a text recording without a time column takes the notebook's declared rate. */
     private static RecordingReader open(Path file, Recording recording) throws IOException {
         RecordingFormat format = recording.getFormat();
