@@ -90,4 +90,17 @@ public final class TestFiles {
         }
         return out;
     }
+
+    /**
+     * SHA-256 of the whole file by the JDK in one call over its bytes: an outside reference for the
+     * readers' streamed digests (which go through org.foldbook.io.Sha256).
+     */
+    public static String jdkSha256(Path file) throws IOException {
+        try {
+            return java.util.HexFormat.of().formatHex(
+                    java.security.MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(file)));
+        } catch (java.security.NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java platform has SHA-256", e);
+        }
+    }
 }

@@ -51,7 +51,7 @@ class Hdf5ReaderTest {
             for (int c = 0; c < channels; c++) {
                 assertArrayEquals(expected[c], got[c], 0.0, "channel " + c);
             }
-            assertEquals(org.foldbook.io.Sha256.ofFile(p), r.sha256Hex());
+            assertEquals(TestFiles.jdkSha256(p), r.sha256Hex(), "the JDK's SHA-256 over the whole file");
         }
     }
 

@@ -97,7 +97,7 @@ class RawReaderTest {
                 assertEquals(expected[0][f], inter[2 * f], 0.0);
                 assertEquals(2 * expected[1][f] + 0.5, inter[2 * f + 1], 0.0, "scale 2/32768, offset 0.5");
             }
-            assertEquals(org.foldbook.io.Sha256.ofFile(p), r.sha256Hex());
+            assertEquals(TestFiles.jdkSha256(p), r.sha256Hex(), "the JDK's SHA-256 over the whole file");
         }
     }
 

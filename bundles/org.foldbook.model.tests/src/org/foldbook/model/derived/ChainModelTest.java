@@ -103,5 +103,9 @@ class ChainModelTest {
         SignalChain c = chain(FilterFamily.BUTTERWORTH, 10000.0);
         assertEquals(ChainModel.of(c).protection(25600).attenuationDb(12800),
                 ChainFigures.chainResponse(c).attenuationDb(12800), 0);
+        // and both agree with the outside value: Butterworth |H|^2 = 1/(1 + (f/fc)^2n), n = 4, fc = 10 kHz
+        // (docs/REFERENCES.md, Butterworth)
+        assertEquals(10 * Math.log10(1 + Math.pow(12800.0 / 10000.0, 8)),
+                ChainFigures.chainResponse(c).attenuationDb(12800), 1e-9);
     }
 }
