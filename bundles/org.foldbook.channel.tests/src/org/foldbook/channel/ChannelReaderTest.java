@@ -15,6 +15,7 @@ import java.util.concurrent.CancellationException;
 
 import org.foldbook.model.Channel;
 import org.foldbook.model.Notebook;
+import org.foldbook.model.RecordingFormat;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -60,6 +61,18 @@ class ChannelReaderTest {
         assertTrue(e.getMessage().contains("changed since it was logged"), e.getMessage());
         ChannelData d = ChannelReader.read(c, new ChannelReader.ReadRequest(true), ReadProgress.NONE);
         assertTrue(d.checksumChanged());
+    }
+
+    @Test
+    void aFileOfAnotherFormatThanLoggedIsNamed() throws IOException {
+        // the javax.sound WAV logged as raw binary: the readers find a WAV, the notebook says otherwise
+        Notebook nb = TestNotebooks.write(dir);
+        Channel c = TestNotebooks.channel(nb, 0);
+        c.getRecording().setFormat(RecordingFormat.RAW_BINARY);
+        ChannelDataException e = assertThrows(ChannelDataException.class,
+                () -> ChannelReader.read(c, ChannelReader.ReadRequest.STRICT, ReadProgress.NONE));
+        assertTrue(e.getMessage().startsWith(dir.resolve("data/sines.wav").toString()), e.getMessage());
+        assertTrue(e.getMessage().contains("as RAW_BINARY, but the file is WAV"), e.getMessage());
     }
 
     @Test

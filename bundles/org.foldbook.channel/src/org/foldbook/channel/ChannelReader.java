@@ -17,6 +17,7 @@ import org.foldbook.model.Channel;
 import org.foldbook.model.Recording;
 import org.foldbook.model.RecordingFormat;
 import org.foldbook.model.persistence.RecordingFiles;
+import org.foldbook.model.persistence.RecordingFormats;
 
 /**
  * Reads a notebook channel's samples: the recording's path resolved against the notebook's folder,
@@ -138,23 +139,32 @@ public final class ChannelReader {
         }
     }
 
-    /** Opens by content; a text recording without a time column takes the notebook's declared rate. */
+    /**
+     * Opens with the reader the logged format selects ({@link RecordingFormats}); a text recording without
+     * a time column takes the notebook's declared rate. A file of another family than the logged one is
+     * an error: the notebook and the file disagree about what the recording is.
+     */
     private static RecordingReader open(Path file, Recording recording) throws IOException {
-        RecordingFormat format = recording.getFormat();
-        boolean text = format == RecordingFormat.CSV || format == RecordingFormat.TSV;
-        if (!text) {
-            return Recordings.open(file, null, ReadOptions.DEFAULT);
-        }
-        RecordingDescriptor detect = DelimitedTextSettings.DETECT;
+        RecordingFormat logged = recording.getFormat();
+        RecordingDescriptor selection = RecordingFormats.readerSelection(logged);
+        RecordingReader reader;
         try {
-            return Recordings.open(file, detect, ReadOptions.DEFAULT);
+            reader = Recordings.open(file, selection, ReadOptions.DEFAULT);
         } catch (RecordingFormatException e) {
-            if (recording.getDeclaredRateHz() > 0 && e.getMessage().contains("no time column")) {
-                return Recordings.open(file, DelimitedTextSettings.DETECT.withSampleRate(recording.getDeclaredRateHz()),
-                        ReadOptions.DEFAULT);
+            if (selection instanceof DelimitedTextSettings text && recording.getDeclaredRateHz() > 0
+                    && e.getMessage().contains("no time column")) {
+                reader = Recordings.open(file, text.withSampleRate(recording.getDeclaredRateHz()), ReadOptions.DEFAULT);
+            } else {
+                throw e;
             }
-            throw e;
         }
+        if (!RecordingFormats.agree(logged, reader.info().format())) {
+            org.foldbook.io.RecordingFormat found = reader.info().format();
+            reader.close();
+            throw new ChannelDataException(file, "the notebook logs recording " + recording.getId() + " as " + logged
+                    + ", but the file is " + found + " (correct the recording's format in the notebook)");
+        }
+        return reader;
     }
 
     private static void checkAgainstNotebook(Path file, RecordingInfo info, Channel channel, Recording recording)
