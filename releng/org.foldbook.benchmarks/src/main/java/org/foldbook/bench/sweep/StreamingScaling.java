@@ -32,7 +32,7 @@ import org.foldbook.sweep.SweepProgress;
  *
  * <pre>
  * java -Xms256m -Xmx256m -cp benchmarks.jar org.foldbook.bench.sweep.StreamingScaling \
- *   --rate 100000 --to 2000 --steps 10 --threads 2 --rounds 2 zero1e7.f64 zero1e8.f64 zero1e9.f64
+ *   --rate 100000 --to 2000 --steps 10 --threads 2 --rounds 2 [--mode bare-kernel] zero1e7.f64 zero1e8.f64 zero1e9.f64
  * </pre>
  */
 public final class StreamingScaling {
@@ -45,6 +45,7 @@ public final class StreamingScaling {
         int steps = 10;
         int threads = 2;
         int rounds = 2;
+        String mode = "bare-kernel";
         List<Path> files = new ArrayList<>();
         for (int i = 0; i < args.length; i++) {
             switch (args[i]) {
@@ -53,10 +54,18 @@ public final class StreamingScaling {
                 case "--steps" -> steps = Integer.parseInt(args[++i]);
                 case "--threads" -> threads = Integer.parseInt(args[++i]);
                 case "--rounds" -> rounds = Integer.parseInt(args[++i]);
+                case "--mode" -> mode = args[++i];
                 default -> files.add(Path.of(args[i]));
             }
         }
         RateLadder ladder = RateLadder.geometric(rate, rate, to, steps, 1000);
+        Resampling how = switch (mode) {
+            case "bare-kernel" -> Resampling.bareKernel();
+            case "bare" -> Resampling.bare();
+            case "polyphase-default" -> Resampling.polyphaseDefault();
+            case "ideal" -> Resampling.idealDecimator();
+            default -> throw new IllegalArgumentException("--mode bare-kernel|bare|polyphase-default|ideal, was " + mode);
+        };
         try (StreamingSweep sweep = new StreamingSweep(threads)) {
             for (int round = 0; round < rounds; round++) {
                 for (Path f : files) {
@@ -67,7 +76,7 @@ public final class StreamingScaling {
                     String json;
                     try (RecordingReader r = RawReader.open(f, RawLayout.of(SampleType.FLOAT64, ByteOrder.LITTLE_ENDIAN,
                             1, true, 0, rate), ReadOptions.DEFAULT.withSha256(false))) {
-                        json = sweep.run(source(r), ladder, Resampling.bare(), SpectrumSettings.DEFAULT,
+                        json = sweep.run(source(r), ladder, how, SpectrumSettings.DEFAULT,
                                 SweepProgress.NONE).toJson();
                     }
                     double wall = (System.nanoTime() - t0) / 1e9;
