@@ -16,6 +16,7 @@ import org.eclipse.e4.ui.model.application.ui.basic.MTrimmedWindow;
 import org.eclipse.e4.ui.workbench.IWorkbench;
 import org.eclipse.e4.ui.workbench.UIEvents;
 import org.eclipse.e4.ui.workbench.modeling.EModelService;
+import org.eclipse.e4.ui.workbench.modeling.EPartService;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.GC;
 import org.eclipse.swt.graphics.Image;
@@ -30,8 +31,9 @@ import jakarta.inject.Inject;
 
 /**
  * Installation self-check ({@code ./foldbook --self-check DIR}): once the workbench has started, it
- * records which windows and parts were really rendered, saves a screenshot of the main window, writes
- * both to DIR and closes the workbench. It lets a person (or the build's smoke test) see that the
+ * records which windows and parts were really rendered, saves a screenshot of the main window, then
+ * shows every part in turn (parts sharing a stack are tabs) and saves a screenshot of each
+ * ({@code part-<id>.png}), writes the report to DIR and closes the workbench. It lets a person (or the build's smoke test) see that the
  * product starts on this machine's display without clicking anything. Inactive unless the system
  * property {@value #PROPERTY} names a folder.
  */
@@ -40,6 +42,8 @@ public class SelfCheckAddon {
     public static final String PROPERTY = "foldbook.selfCheck";
     /** Delay before the check, so that the first layout and paint have happened. */
     private static final int SETTLE_MILLIS = 2500;
+    /** Time a part gets, once shown, to read its data and draw. */
+    private static final int PART_SETTLE_MILLIS = 2000;
 
     @Inject
     private MApplication application;
@@ -75,16 +79,34 @@ public class SelfCheckAddon {
                 report.add("window.title=" + mainShell.getText());
                 Rectangle b = mainShell.getBounds();
                 report.add("window.size=" + b.width + "x" + b.height);
+                Rectangle client = mainShell.getClientArea();
+                report.add("window.clientArea=" + client.width + "x" + client.height);
+                Rectangle screen = display.getBounds();
+                report.add("display.size=" + screen.width + "x" + screen.height);
+                report.add("window.location=" + b.x + "," + b.y);
             }
-        }
-        for (MPart part : modelService.findElements(application, null, MPart.class)) {
-            boolean shown = part.getWidget() instanceof Control c && !c.isDisposed() && c.isVisible();
-            report.add("part." + part.getElementId() + "=" + (shown ? "visible" : "not-visible"));
         }
         try {
             Files.createDirectories(folder);
             if (mainShell != null) {
                 report.add("screenshot=" + saveScreenshot(display, mainShell, folder.resolve("workbench.png")));
+            }
+            // then every part brought to the top of its stack in turn (tabs hide each other), given time
+            // to read and draw, recorded and photographed on its own
+            for (MPart part : modelService.findElements(application, null, MPart.class)) {
+                EPartService parts = part.getContext() != null ? part.getContext().get(EPartService.class)
+                        : mainWindowParts();
+                if (parts != null) {
+                    parts.showPart(part, EPartService.PartState.VISIBLE);
+                }
+                settle(display, PART_SETTLE_MILLIS);
+                boolean shown = part.getWidget() instanceof Control c && !c.isDisposed() && c.isVisible();
+                report.add("part." + part.getElementId() + "=" + (shown ? "visible" : "not-visible"));
+                if (shown) {
+                    Path shot = folder.resolve("part-" + part.getElementId() + ".png");
+                    report.add("part." + part.getElementId() + ".screenshot="
+                            + saveScreenshot(display, (Control) part.getWidget(), shot));
+                }
             }
             Files.write(folder.resolve("self-check.properties"), report, StandardCharsets.UTF_8);
         } catch (IOException e) {
@@ -92,19 +114,58 @@ public class SelfCheckAddon {
         }
     }
 
-    /** Copies the main window's pixels from the screen into a PNG. */
-    private static Path saveScreenshot(Display display, Shell shell, Path file) {
-        shell.forceActive();
+    private EPartService mainWindowParts() {
+        for (MTrimmedWindow window : modelService.findElements(application, null, MTrimmedWindow.class)) {
+            if (window.getContext() != null) {
+                return window.getContext().get(EPartService.class);
+            }
+        }
+        return null;
+    }
+
+    /** Runs the event loop for {@code millis}: background reads finish and post their results. */
+    private static void settle(Display display, long millis) {
+        long end = System.nanoTime() + millis * 1_000_000;
+        while (System.nanoTime() < end) {
+            if (!display.readAndDispatch()) {
+                try {
+                    Thread.sleep(10);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                }
+            }
+        }
+    }
+
+    /**
+     * A control's pixels as a PNG: the window copied from the screen (what a person sees), a part drawn
+     * by the control itself into an image (whole, even where the screen cuts the window off).
+     */
+    private static Path saveScreenshot(Display display, Control control, Path file) {
+        control.getShell().forceActive();
         while (display.readAndDispatch()) {
             // let pending paints finish before reading pixels back
         }
-        Rectangle outer = shell.getBounds();
+        Rectangle outer = control instanceof Shell ? control.getBounds()
+                : display.map(control.getParent(), null, control.getBounds());
         Image image = new Image(display, outer.width, outer.height);
-        GC gc = new GC(display);
-        try {
-            gc.copyArea(image, outer.x, outer.y);
-        } finally {
-            gc.dispose();
+        boolean printed = false;
+        if (!(control instanceof Shell)) {
+            GC own = new GC(image);
+            try {
+                printed = control.print(own);
+            } finally {
+                own.dispose();
+            }
+        }
+        if (!printed) {
+            GC gc = new GC(display);
+            try {
+                gc.copyArea(image, outer.x, outer.y);
+            } finally {
+                gc.dispose();
+            }
         }
         try {
             ImageData data = image.getImageData();

@@ -17,6 +17,7 @@ import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.Spinner;
 import org.eclipse.swt.widgets.Table;
@@ -140,6 +141,21 @@ class WalkthroughPartTest {
         assertEquals("−0.5 rev/s (backward)", figures().get("Apparent rotation"));
         assertEquals(-0.5, part.pageView().motion().motion().seen().apparentRevolutionsPerSecond(), 1e-12);
         assertEquals(1000, ChainFigures.samplingRateHz(document.notebook().getRigs().get(0).getChains().get(3)), 0);
+    }
+
+    @Test
+    @DisplayName("Export page writes the rig's walkthrough in a job and says where")
+    void export() throws Exception {
+        Path file = folder.resolve("walkthrough.html");
+        ExportJob job = part.exportTo(file);
+        job.schedule();
+        job.join();
+        pump(100);
+        org.jsoup.nodes.Document page = org.jsoup.Jsoup.parse(file.toFile(), "UTF-8");
+        assertEquals(5, page.select("section.chain").size()); // the demo rig's five chains
+        assertEquals(1 + 4 + 4 + 2 + 1 + 3, page.select("section.stage").size()); // cautions + every stage
+        Label status = (Label) find(shell, Label.class, l -> l.getText().startsWith("Walkthrough written to "));
+        assertNotNull(status);
     }
 
     private Map<String, String> figures() {

@@ -26,9 +26,15 @@ import org.foldbook.ui.notebook.ChainSummary;
  * @param whatIf  the change tried ({@link WhatIf#NONE}: the notebook as it is)
  * @param channel the channel the walkthrough was opened for, or null
  * @param pages   cautions first, then one page per stage
+ * @param words   the rig's and the chain's names and the chain's path in words, taken when computed (the
+ *                printable page is written off the UI thread and reads no model object)
  */
 public record Walkthrough(Rig rig, SignalChain chain, SignalChain tried, WhatIf whatIf, Channel channel,
-        List<StagePage> pages) {
+        List<StagePage> pages, Words words) {
+
+    /** Words about the rig and chain, fixed when the walkthrough was computed. */
+    public record Words(String rig, String chain, String chainId, String path) {
+    }
 
     public Walkthrough {
         pages = List.copyOf(pages);
@@ -57,7 +63,10 @@ public record Walkthrough(Rig rig, SignalChain chain, SignalChain tried, WhatIf 
                         java.util.Optional.empty(), java.util.Optional.empty(), i);
             });
         }
-        return new Walkthrough(rig, chain, tried, change, channel, pages);
+        return new Walkthrough(rig, chain, tried, change, channel, pages, new Words(
+                Names.shortName(rig), Names.shortName(chain),
+                chain.getId() != null ? chain.getId() : Names.shortName(chain),
+                ChainSummary.path(tried)));
     }
 
     /** The walkthrough for a channel: its chain, in the rig that holds the chain. */
@@ -71,7 +80,7 @@ public record Walkthrough(Rig rig, SignalChain chain, SignalChain tried, WhatIf 
 
     /** The stages as one line (the running picture's text form). */
     public String path() {
-        return ChainSummary.path(tried);
+        return words.path();
     }
 
     /** The index of the page of stage {@code stageIndex}. */

@@ -91,6 +91,10 @@ public class WalkthroughPart {
         new Label(top, SWT.NONE).setText("   Chain:");
         chains = new Combo(top, SWT.READ_ONLY);
         GridDataFactory.fillDefaults().hint(300, SWT.DEFAULT).applyTo(chains);
+        Button export = new Button(top, SWT.PUSH);
+        export.setText("Export page…");
+        export.setToolTipText("The whole rig's walkthrough as one self-contained HTML page with its charts (as the notebook says, without the what-if)");
+        export.addListener(SWT.Selection, e -> export());
         rigs.addListener(SWT.Selection, e -> {
             session.pick(session.rigs().get(rigs.getSelectionIndex()), null);
             refresh();
@@ -205,6 +209,40 @@ public class WalkthroughPart {
             message = "Kept in the notebook (not yet saved); Edit ▸ Undo takes it back.";
         }
         refresh(true);
+    }
+
+    /** Asks for a file, computes every chain's pages of the rig here, writes them in an {@link ExportJob}. */
+    private void export() {
+        if (session.rig() == null || document == null) {
+            return;
+        }
+        org.eclipse.swt.widgets.FileDialog dialog = new org.eclipse.swt.widgets.FileDialog(rigs.getShell(), SWT.SAVE);
+        dialog.setText("Export the walkthrough");
+        dialog.setFilterExtensions(new String[] { "*.html" });
+        dialog.setFileName("walkthrough-" + Names.shortName(session.rig()).replaceAll("[^A-Za-z0-9.-]+", "-") + ".html");
+        dialog.setFilterPath(document.file().getParent().toString());
+        dialog.setOverwrite(true);
+        String chosen = dialog.open();
+        if (chosen != null) {
+            exportTo(java.nio.file.Path.of(chosen)).schedule();
+        }
+    }
+
+    /** The export of the picked rig to {@code file} (not yet scheduled; tests join it). */
+    ExportJob exportTo(java.nio.file.Path file) {
+        org.foldbook.model.Rig rig = session.rig();
+        java.util.List<Walkthrough> all = rig.getChains().stream().map(c -> Walkthrough.of(rig, c, WhatIf.NONE, null))
+                .toList();
+        String source = "Computed from the notebook " + document.file() + (document.isDirty() ? " (with unsaved changes)" : "")
+                + " on " + java.time.LocalDate.now() + ".";
+        org.eclipse.swt.widgets.Display display = rigs.getDisplay();
+        return new ExportJob(Names.shortName(rig), all, source, file, words -> display.asyncExec(() -> {
+            if (!rigs.isDisposed()) {
+                message = words;
+                problem = words.startsWith("Could not");
+                refresh(false);
+            }
+        }));
     }
 
     private void say(Optional<String> outcome) {

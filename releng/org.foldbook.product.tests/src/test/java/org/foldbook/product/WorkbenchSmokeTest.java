@@ -74,6 +74,8 @@ class WorkbenchSmokeTest {
         assertEquals("Foldbook", report.getProperty("window.title"), report.toString());
         assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.foldExplorer"), report.toString());
         assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.notebook"), report.toString());
+        assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.walkthrough"), report.toString());
+        assertTrue(Files.isRegularFile(out.resolve("part-org.foldbook.ui.part.walkthrough.png")), report.toString());
         // first start: the demo notebook was written into the workspace (-data) and opened from there
         Path demo = out.resolve("workspace/demo/gearbox-stand.foldbook");
         assertTrue(Files.isRegularFile(demo), "no demo notebook at " + demo + "; console:\n" + console);
