@@ -94,6 +94,7 @@ class WalkthroughPartTest {
         assertEquals(2, part.pageView().plot().bandCount()); // folds back, lands in
         click(back);
         assertEquals("Anti-alias filter: LP-A", part.session().page().title());
+        screenshot("walkthrough-filter.png");
         assertEquals("9.1 dB at 12.8 kHz", figures().get("Attenuation at Nyquist")); // 10·log10(1 + 1.28^8)
     }
 
@@ -137,6 +138,7 @@ class WalkthroughPartTest {
         fps.setSelection(250); // 25.0 frames/s
         fps.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
         pump(300); // a few animation ticks on the UI thread
+        screenshot("walkthrough-camera.png");
         // 24.5 − round(24.5/25)·25 = −0.5 (fold formula)
         assertEquals("−0.5 rev/s (backward)", figures().get("Apparent rotation"));
         assertEquals(-0.5, part.pageView().motion().motion().seen().apparentRevolutionsPerSecond(), 1e-12);
@@ -156,6 +158,29 @@ class WalkthroughPartTest {
         assertEquals(1 + 4 + 4 + 2 + 1 + 3, page.select("section.stage").size()); // cautions + every stage
         Label status = (Label) find(shell, Label.class, l -> l.getText().startsWith("Walkthrough written to "));
         assertNotNull(status);
+        java.nio.file.Files.createDirectories(Path.of("target", "screenshots")); // kept for a person to look at
+        java.nio.file.Files.copy(file, Path.of("target", "screenshots", "walkthrough-gb-2.html"),
+                java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+    }
+
+    /** The shell's pixels into target/screenshots (for the README; looked at by a person, not compared). */
+    private void screenshot(String name) {
+        pump(200);
+        org.eclipse.swt.graphics.Rectangle b = shell.getBounds();
+        org.eclipse.swt.graphics.Image image = new org.eclipse.swt.graphics.Image(display, b.width, b.height);
+        org.eclipse.swt.graphics.GC gc = new org.eclipse.swt.graphics.GC(display);
+        try {
+            gc.copyArea(image, b.x, b.y);
+            java.nio.file.Files.createDirectories(Path.of("target", "screenshots"));
+            org.eclipse.swt.graphics.ImageLoader loader = new org.eclipse.swt.graphics.ImageLoader();
+            loader.data = new org.eclipse.swt.graphics.ImageData[] { image.getImageData() };
+            loader.save(Path.of("target", "screenshots", name).toString(), SWT.IMAGE_PNG);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        } finally {
+            gc.dispose();
+            image.dispose();
+        }
     }
 
     private Map<String, String> figures() {

@@ -100,7 +100,7 @@ public record FilmedMotion(RotationSeenByCamera seen, double exposureSeconds) {
         double fps = seen.frameRateHz();
         double duration = frames / fps;
         double pitch = pitchDegrees();
-        int dense = 2000;
+        int dense = 1000;
         double[] t = new double[dense + 1];
         double[] truth = new double[dense + 1];
         double[] film = new double[dense + 1];
@@ -120,7 +120,7 @@ public record FilmedMotion(RotationSeenByCamera seen, double exposureSeconds) {
         lines.add(new StageChart.Line("on film: " + shortWord(), t, film, StageChart.Style.LINE));
         lines.add(new StageChart.Line("frames", ft, fa, StageChart.Style.POINTS));
         return new StageChart("The mark, true and on film, at " + Quantities.number(fps) + " frames/s", "Time (ms)",
-                "Mark position (degrees within one pitch)", lines, List.of(), new double[] { 0, 1000 * duration },
+                "Mark angle (°)", lines, List.of(), new double[] { 0, 1000 * duration },
                 new double[] { 0, pitch });
     }
 

@@ -23,6 +23,8 @@ import org.foldbook.ui.chart.PlotView;
  */
 final class PageView {
 
+    private final SashForm sash;
+    private final Composite left;
     private final Label title;
     private final Text text;
     private final Table figures;
@@ -33,9 +35,9 @@ final class PageView {
     private final Spinner frameRate;
 
     PageView(Composite parent, Consumer<String> onFrameRate) {
-        SashForm sash = new SashForm(parent, SWT.HORIZONTAL);
+        sash = new SashForm(parent, SWT.HORIZONTAL);
         GridDataFactory.fillDefaults().grab(true, true).applyTo(sash);
-        Composite left = new Composite(sash, SWT.NONE);
+        left = new Composite(sash, SWT.NONE);
         GridLayoutFactory.fillDefaults().margins(4, 4).spacing(4, 6).applyTo(left);
         title = new Label(left, SWT.NONE);
         title.setFont(JFaceResources.getFontRegistry().getBold(JFaceResources.HEADER_FONT));
@@ -91,6 +93,11 @@ final class PageView {
         plot.control().setVisible(page.chart().isPresent());
         ((org.eclipse.swt.layout.GridData) plot.control().getLayoutData()).exclude = page.chart().isEmpty();
         showMotion(page.motion().orElse(null));
+        boolean table = !page.figures().isEmpty();
+        figures.setVisible(table);
+        ((org.eclipse.swt.layout.GridData) figures.getLayoutData()).exclude = !table;
+        // a page with nothing to draw (the cautions) gets the whole width for its words
+        sash.setMaximizedControl(page.chart().isEmpty() && page.motion().isEmpty() ? left : null);
         title.getParent().layout(true, true);
         right.layout(true, true);
     }

@@ -37,13 +37,18 @@ final class ResponseCharts {
             x[i] = top * i / POINTS;
             y[i] = Math.max(floor, -response.attenuationDb(x[i]));
         }
+        double peak = 0;
+        for (double v : y) {
+            peak = Math.max(peak, v);
+        }
+        double ceiling = 10 * Math.ceil((peak + 5) / 10); // room for a resonance's peak
         List<StageChart.Line> lines = new ArrayList<>();
         List<StageChart.Band> bands = new ArrayList<>();
         lines.add(new StageChart.Line("response", x, y, StageChart.Style.LINE));
         if (rate > 0) {
             double nyquist = rate / 2;
             lines.add(new StageChart.Line("Nyquist " + Quantities.hz(nyquist), new double[] { nyquist, nyquist },
-                    new double[] { floor, 10 }, StageChart.Style.MARKER));
+                    new double[] { floor, ceiling }, StageChart.Style.MARKER));
             if (upper > nyquist) {
                 bands.add(new StageChart.Band("folds back: " + Quantities.hz(nyquist) + " – " + Quantities.hz(upper),
                         nyquist, Math.min(upper, top), true));
@@ -57,6 +62,6 @@ final class ResponseCharts {
                     new double[] { -need, -need }, StageChart.Style.MARKER));
         }
         return Optional.of(new StageChart(title, "Frequency (Hz)", "Gain (dB)", lines, bands,
-                new double[] { 0, top }, new double[] { floor, 10 }));
+                new double[] { 0, top }, new double[] { floor, ceiling }));
     }
 }

@@ -41,6 +41,7 @@ public final class WalkthroughCharts {
 
     static String svg(JFreeChart chart) {
         SVGGraphics2D g = new SVGGraphics2D(WIDTH, HEIGHT);
+        g.setGeomDoubleConverter(v -> Double.toString(Math.round(v * 10) / 10.0)); // 0.1 px is finer than print
         chart.draw(g, new Rectangle2D.Double(0, 0, WIDTH, HEIGHT));
         return g.getSVGElement();
     }
