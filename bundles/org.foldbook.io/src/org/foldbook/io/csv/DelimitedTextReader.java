@@ -32,8 +32,9 @@ import org.foldbook.io.internal.Buffers;
 /**
  * Reads comma, semicolon or tab separated recordings, one row per frame. Opening makes one full pass
  * (bounded memory) that validates every cell, detects the header, separator and decimal mark, measures
- * the timing of the time column and computes SHA-256; reading makes a second pass. Blank lines and lines
- * starting with '#' are skipped. Empty cells are missing samples and come back as NaN (counted in
+ * the timing of the time column and computes SHA-256; reading makes a second pass. Rows are split by
+ * Apache Commons CSV ({@link CsvRows}), so a quoted cell may hold the separator, doubled quotes or a line
+ * break. Blank lines and lines whose first non-blank character is '#' are skipped. Empty cells are missing samples and come back as NaN (counted in
  * {@link RecordingInfo#missingValues()}); text such as "NaN" or "inf" is refused. The time column is not
  * one of the channels; {@link #read(double[][], double[], int, int)} returns it in seconds. Samples are
  * never resampled: irregular time stamps are reported in {@link RecordingInfo#timing()}.
