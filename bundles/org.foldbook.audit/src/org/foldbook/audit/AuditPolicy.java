@@ -10,7 +10,7 @@ package org.foldbook.audit;
  * @param dropoutSamples         this many consecutive exact zeros (or NaNs) make a dropout
  * @param flatSamples            this many consecutive identical non-zero values make a flat run
  * @param nyquistBandFraction    the top part of 0..fs/2 examined for energy near Nyquist
- * @param nyquistExcessDb        energy there this far above the quantisation floor says no effective low-pass
+ * @param nyquistExcessDb        the top of the band less than this far below the broadband floor says no effective low-pass
  * @param foldedMarginDb         a folded candidate this far above the in-band one (through the chain, in a
  *                               higher-rate recording) makes a peak "probably folded"
  * @param negligibleDb           a candidate this far below the in-band one is negligible

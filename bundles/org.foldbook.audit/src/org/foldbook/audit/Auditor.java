@@ -108,7 +108,7 @@ public final class Auditor {
         double searchUpper = upper > 0 ? upper : ref != null ? ref.spectrum().rateHz() / 2 : 4 * rate;
         if (spectrum.isPresent() && rate > 0) {
             ChannelSpectrum sp = spectrum.get();
-            DataAudit.nyquist(at, sp, bits, policy);
+            DataAudit.nyquist(at, sp, policy);
             double ceiling = chain == null ? 0 : ChainFigures.need(chain).map(ChainFigures.Need::outOfBandLevelDbfs)
                     .orElse(chain.getOutOfBandLevelDbfs() != null ? chain.getOutOfBandLevelDbfs() : 0.0);
             int segment = (int) Math.round(sp.rateHz() / sp.binHz());
@@ -124,7 +124,9 @@ public final class Auditor {
             }
         }
         if (rate > 0 && searchUpper > 0) {
-            FoldedNoise m = FoldedNoise.fromModel(protection, rate, searchUpper);
+            FoldedNoise m = FoldedNoise.fromModel(protection, rate, searchUpper, upper > 0 ? "the front end's upper edge"
+                    : ref != null ? "the higher-rate recording's Nyquist; the front end's upper edge is not recorded"
+                            : "4·fs, our assumption: the front end's upper edge is not recorded");
             modelNoise = Optional.of(m);
             noiseFinding(at, m);
             if (ref != null) {
@@ -158,7 +160,7 @@ public final class Auditor {
     private static void noiseFinding(Subject at, FoldedNoise n) {
         Severity sev = n.riseDb() >= 3 ? Severity.WARNING : Severity.INFO;
         at.add(AuditKind.FOLDED_NOISE, sev, String.format(Locale.ROOT,
-                "folded broadband noise raises the floor by %s (from the %s: %s)", Quantities.db(n.riseDb()),
+                "folded broadband noise raises the floor by %s (from the %s: %s)", Words.db(n.riseDb()),
                 n.source(), n.basis()), fig("riseDb", n.riseDb(), "dB"));
     }
 

@@ -54,7 +54,9 @@ final class ChainAudit {
                     + "the band that can fold is unknown");
         }
         switch (model.antiAliasState()) {
-        case ABSENT -> at.add(AuditKind.SETTING_MISSING, Severity.INFO, "no anti-alias filter in the chain");
+        case ABSENT -> at.add(AuditKind.SETTING_MISSING, Severity.INFO, model.digitizerFilter().isPresent()
+                ? "no analog anti-alias filter; the digitizer's built-in digital filter protects the band"
+                : "no anti-alias filter in the chain");
         case UNDESCRIBED -> at.add(AuditKind.SETTING_MISSING,
                 "the anti-alias filter's family, order or cutoff is not recorded; it is treated as absent");
         case BYPASSED -> at.add(AuditKind.SETTING_MISSING, Severity.INFO, "the anti-alias filter is in bypass");
@@ -74,9 +76,10 @@ final class ChainAudit {
         Optional<ProtectionFigures> figures = ChainFigures.figures(chain);
         if (figures.isPresent()) {
             ProtectionFigures p = figures.get();
-            at.add(AuditKind.ALIAS_FREE_BAND, "alias-free from 0 to " + Quantities.hz(p.aliasFreeBandHz()) + " at "
-                    + Quantities.rate(rate) + " (needs " + Quantities.db(p.requiredAttenuationDb())
-                    + " of attenuation; " + Quantities.db(p.attenuationAtNyquistDb()) + " at Nyquist)",
+            at.add(AuditKind.ALIAS_FREE_BAND, (p.aliasFreeBandHz() > 0 ? "alias-free from 0 to "
+                    + Quantities.hz(p.aliasFreeBandHz()) : "no band is alias-free") + " at "
+                    + Quantities.rate(rate) + " (needs " + Words.db(p.requiredAttenuationDb())
+                    + " of attenuation; " + Words.db(p.attenuationAtNyquistDb()) + " at Nyquist)",
                     fig("aliasFreeBandHz", p.aliasFreeBandHz(), "Hz"), fig("nyquistHz", p.nyquistHz(), "Hz"),
                     fig("requiredAttenuationDb", p.requiredAttenuationDb(), "dB"),
                     fig("attenuationAtNyquistDb", p.attenuationAtNyquistDb(), "dB"), fig("marginDb", p.marginDb(), "dB"));
@@ -125,8 +128,8 @@ final class ChainAudit {
             double requiredDb) {
         for (FoldBand b : foldBands(protection, rate, upper, requiredDb)) {
             at.add(AuditKind.UNPROTECTED_BAND, "the front end passes " + Quantities.hz(b.fromHz()) + "–"
-                    + Quantities.hz(b.toHz()) + " with as little as " + Quantities.db(b.leastAttenuationDb())
-                    + " of attenuation (" + Quantities.db(requiredDb) + " needed); it folds onto "
+                    + Quantities.hz(b.toHz()) + " with as little as " + Words.db(b.leastAttenuationDb())
+                    + " of attenuation (" + Words.db(requiredDb) + " needed); it folds onto "
                     + Quantities.hz(b.landsFromHz()) + "–" + Quantities.hz(b.landsToHz()),
                     fig("fromHz", b.fromHz(), "Hz"), fig("toHz", b.toHz(), "Hz"),
                     fig("landsFromHz", b.landsFromHz(), "Hz"), fig("landsToHz", b.landsToHz(), "Hz"),

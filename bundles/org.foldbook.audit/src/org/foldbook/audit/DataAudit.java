@@ -39,7 +39,7 @@ final class DataAudit {
             double dbfs = fsKnown ? 20 * Math.log10(Math.max(Math.abs(mean), 1e-300) / fullScale) : Double.NaN;
             if (big) {
                 at.add(AuditKind.DC_OFFSET, "mean " + Quantities.number(mean)
-                        + (fsKnown ? " (" + Quantities.db(dbfs).replace(" dB", " dBFS") + ")" : "")
+                        + (fsKnown ? " (" + Words.db(dbfs).replace(" dB", " dBFS") + ")" : "")
                         + " against an AC level (RMS) of " + Quantities.number(ac),
                         fig("mean", mean, ""), fig("offsetDbfs", dbfs, "dBFS"), fig("acRms", ac, ""));
             }
@@ -50,8 +50,8 @@ final class DataAudit {
             double snr = 6.02 * used + 1.76;
             Severity sev = used < bits - policy.unusedBits() ? Severity.WARNING : Severity.INFO;
             at.add(AuditKind.RANGE_USE, sev, String.format(java.util.Locale.ROOT,
-                    "the signal spans %.1f of the digitizer's %d bits (peak-to-peak %s of %s): a full-scale "
-                            + "sine at this span would reach %.1f dB signal-to-quantisation ratio (6.02·N + 1.76 dB)",
+                    "the signal spans %.1f of the digitizer's %d bits (peak-to-peak %s of %s): a sine of that span "
+                            + "would reach at most %.1f dB signal-to-quantisation ratio (6.02·N + 1.76 dB)",
                     used, bits, Quantities.number(s.max - s.min), Quantities.number(2 * fullScale), snr),
                     fig("bitsUsed", used, "bits"), fig("digitizerBits", bits, "bits"),
                     fig("idealSnrDb", snr, "dB"), fig("min", s.min, ""), fig("max", s.max, ""));
@@ -74,11 +74,12 @@ final class DataAudit {
     }
 
     /**
-     * Energy near Nyquist: the mean density over the top {@code nyquistBandFraction} of 0..fs/2, against
-     * the ideal quantiser's floor q²/(6·fs) per Hz (q = 2·FS/2^N, noise q²/12 spread over fs/2), or against
-     * the median of the whole spectrum when full scale or resolution is unknown.
+     * Energy near Nyquist: the mean density over the top {@code nyquistBandFraction} of 0..fs/2 against the
+     * broadband floor of the band (the median density over 0..fs/4). An effective low-pass ahead of the
+     * digitizer pushes the top down well below the floor; a spectrum still as high there says it did not,
+     * or that content folds in there.
      */
-    static void nyquist(Subject at, ChannelSpectrum sp, int bits, AuditPolicy policy) {
+    static void nyquist(Subject at, ChannelSpectrum sp, AuditPolicy policy) {
         int n = sp.bins();
         if (n < 16) {
             return;
@@ -89,25 +90,18 @@ final class DataAudit {
             top += sp.psd()[k];
         }
         top /= (n - from);
-        boolean quantKnown = sp.fullScale() > 0 && bits > 0;
-        double ref;
-        String against;
-        if (quantKnown) {
-            double q = 2 * sp.fullScale() / Math.pow(2, bits);
-            ref = q * q / (6 * sp.rateHz());
-            against = "the " + bits + "-bit quantisation floor";
-        } else {
-            double[] sorted = Arrays.copyOf(sp.psd(), n);
-            Arrays.sort(sorted);
-            ref = sorted[n / 2];
-            against = "the spectrum's median";
-        }
-        double excess = 10 * Math.log10(Math.max(top, 1e-300) / Math.max(ref, 1e-300));
-        Severity sev = excess >= policy.nyquistExcessDb() ? Severity.WARNING : Severity.INFO;
+        int quarter = n / 2;
+        double[] low = Arrays.copyOfRange(sp.psd(), 1, quarter);
+        Arrays.sort(low);
+        double floor = low[low.length / 2];
+        double drop = 10 * Math.log10(Math.max(floor, 1e-300) / Math.max(top, 1e-300));
+        Severity sev = drop < policy.nyquistExcessDb() ? Severity.WARNING : Severity.INFO;
         at.add(AuditKind.ENERGY_AT_NYQUIST, sev, String.format(java.util.Locale.ROOT,
-                "over the top %.0f %% of the band (%s–%s) the spectrum is %s above %s%s", 100 * policy.nyquistBandFraction(),
-                Quantities.hz(from * sp.binHz()), Quantities.hz(sp.rateHz() / 2), Quantities.signedDb(excess), against,
-                sev == Severity.WARNING ? ": no effective low-pass was in place, or content folds in there" : ""),
-                fig("excessDb", excess, "dB"), fig("fromHz", from * sp.binHz(), "Hz"));
+                "over the top %.0f %% of the band (%s–%s) the spectrum lies %s below the broadband floor of 0–%s%s",
+                100 * policy.nyquistBandFraction(), Quantities.hz(from * sp.binHz()), Quantities.hz(sp.rateHz() / 2),
+                Words.db(drop), Quantities.hz(sp.rateHz() / 4),
+                sev == Severity.WARNING ? " (less than " + Words.db(policy.nyquistExcessDb())
+                        + "): no effective low-pass was in place, or content folds in there" : ""),
+                fig("dropDb", drop, "dB"), fig("fromHz", from * sp.binHz(), "Hz"));
     }
 }

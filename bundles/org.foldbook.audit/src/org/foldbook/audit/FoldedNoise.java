@@ -23,12 +23,16 @@ public record FoldedNoise(double riseDb, String source, String basis) {
     static final int STEPS = 20_000;
 
     static FoldedNoise fromModel(FrequencyResponse h, double rate, double upperHz) {
+        return fromModel(h, rate, upperHz, "the front end's upper edge");
+    }
+
+    static FoldedNoise fromModel(FrequencyResponse h, double rate, double upperHz, String upperIs) {
         double nyq = rate / 2;
         double inband = integral(h, 0, nyq);
         double folded = upperHz > nyq ? integral(h, nyq, upperHz) : 0;
         return new FoldedNoise(10 * Math.log10(1 + folded / inband), "model",
                 "white noise at the sensor up to " + org.foldbook.model.derived.Quantities.hz(upperHz)
-                        + " (the front end's upper edge), through the chain's modelled protection");
+                        + " (" + upperIs + "), through the chain's modelled protection");
     }
 
     /** Empty-handed (NaN rise) when the reference does not reach above this channel's Nyquist. */

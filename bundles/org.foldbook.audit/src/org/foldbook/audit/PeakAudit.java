@@ -103,9 +103,9 @@ final class PeakAudit {
             return new PeakAssessment(f, level, cands, PeakVerdict.PROBABLY_FOLDED, String.format(Locale.ROOT,
                     "%s: %s shows %s at %s, which this chain passes %s attenuated and folds to %s; that is %s above"
                             + " what it shows at %s itself",
-                    at, ref.label(), Quantities.db(dominant.referenceLevelDb()).replace(" dB", " dBFS"),
-                    Quantities.hz(dominant.trueHz()), Quantities.db(dominant.attenuationDb()), Quantities.hz(f),
-                    Double.isNaN(inbandRef) ? "far" : Quantities.db(dominant.referenceLevelDb() - inbandRef),
+                    at, ref.label(), Words.db(dominant.referenceLevelDb()).replace(" dB", " dBFS"),
+                    Quantities.hz(dominant.trueHz()), Words.db(dominant.attenuationDb()), Quantities.hz(f),
+                    Double.isNaN(inbandRef) ? "far" : Words.db(dominant.referenceLevelDb() - inbandRef),
                     Quantities.hz(f)));
         }
         if (!open.isEmpty()) {
@@ -113,11 +113,11 @@ final class PeakAudit {
             String why = Double.isNaN(c.referenceLevelDb())
                     ? String.format(Locale.ROOT, "a sine of %s at %s would put it here (the chain attenuates %s there); "
                             + "the chain does not rule out content that strong above Nyquist (%s)",
-                            Quantities.db(c.sensorLevelDb()).replace(" dB", " dBFS"), Quantities.hz(c.trueHz()),
-                            Quantities.db(c.attenuationDb()),
-                            "limit " + Quantities.db(ceilingDbfs).replace(" dB", " dBFS"))
+                            Words.db(c.sensorLevelDb()).replace(" dB", " dBFS"), Quantities.hz(c.trueHz()),
+                            Words.db(c.attenuationDb()),
+                            "limit " + Words.db(ceilingDbfs).replace(" dB", " dBFS"))
                     : String.format(Locale.ROOT, "%s shows %s at %s through this chain, not negligible against the "
-                            + "in-band reading", ref.label(), Quantities.db(c.referenceLevelDb()).replace(" dB", " dBFS"),
+                            + "in-band reading", ref.label(), Words.db(c.referenceLevelDb()).replace(" dB", " dBFS"),
                             Quantities.hz(c.trueHz()));
             return new PeakAssessment(f, level, cands, PeakVerdict.COULD_BE_FOLDED,
                     at + ": " + open.size() + " folded reading(s) not ruled out; " + why);
