@@ -199,11 +199,15 @@ class VerdictTest {
         RateResult withFloor = c.classify(step, 1000, df, seen, null, floor, Double.NEGATIVE_INFINITY);
         assertEquals(Verdict.BURIED, withFloor.fate(2).verdict());
         assertTrue(withFloor.fate(2).reason().contains("not removed by the chain"), withFloor.fate(2).reason());
-        // beyond the match radius (0.05 source bin + 1.5 bins = 2 Hz) it is no longer the source peak: the
-        // stronger peak 2.5 Hz (2.5 bins) away hides it
+        // beyond the match radius (0.05 source bin + 1.5 bins = 2 Hz) it is no longer the source peak itself,
+        // but it lies within the source's 10 Hz bin, which this rate's 1 Hz bins resolve: SPLITS, claimed
         RateResult far = c.classify(step, 1000, df, List.of(peak(1002.5, 0)));
-        assertEquals(Verdict.HIDDEN, far.fate(0).verdict());
-        assertEquals(Verdict.UNEXPLAINED, far.observed().get(0).verdict());
+        assertEquals(Verdict.SPLITS, far.fate(0).verdict());
+        assertEquals(Verdict.SPLITS, far.observed().get(0).verdict());
+        assertEquals(0, far.observed().get(0).sourcePeak());
+        // 13 Hz away it is neither: the stronger unexplained peak hides the source peak
+        RateResult beside = c.classify(step, 1000, df, List.of(peak(1013, 0)));
+        assertEquals(Verdict.UNEXPLAINED, beside.observed().get(0).verdict());
         // 6001.8 Hz folds to 1001.8 Hz, 1.8 bins from the seen 1000 Hz peak of source peak 0: not resolved beside it.
         // HIDDEN, naming it, the separation and the segment for 4 bins of separation: 4·5000/1.8 -> 16384 samples
         VerdictClassifier two = new VerdictClassifier(List.of(new SourcePeak(0, 1000, -10, 0),

@@ -14,6 +14,11 @@ public enum Verdict {
     HIDDEN("hidden"),
     /** Lands on the same bin as another source peak's alias (or the other peak itself): two components in one. */
     COINCIDES("coincides"),
+    /**
+     * The source spectrum held components closer than its bin as one peak; at this rate's finer bins they
+     * come apart into several peaks near the predicted frequency (all of them claimed by this source peak).
+     */
+    SPLITS("splits"),
     /** Lands within two bins of 0 Hz, where the spectrum shows no peak. */
     AT_DC("at-dc"),
     /** Lands within two bins of the new Nyquist frequency fs/2, where the spectrum shows no peak. */

@@ -20,6 +20,8 @@ import org.foldbook.dsp.peaks.SpectralPeak;
  * above the source peak's predicted level (its power times the mode's |H(f)|²) is not taken for it. Source
  * peaks are served strongest first. One not seen gets, in this order:
  * <ul>
+ * <li>SPLITS when this rate's bins are finer than the source's and peaks it claims lie within a source bin
+ *     of it: components the source spectrum could not resolve;</li>
  * <li>REMOVED when its predicted level lies below the detection floor (the running-median floor of this
  *     rate's spectrum, or the quantisation floor if higher, plus the margin) and the chain took it there;
  *     BURIED when its own level is already below that floor (nothing attenuated it much);</li>
@@ -167,6 +169,25 @@ public final class VerdictClassifier {
                 fates[i] = new SourceFate(i, folded ? Verdict.FOLDS : Verdict.SURVIVES, a, p.frequencyHz(), g, gainDb,
                         floor, -1, Double.NaN, 0, String.format(Locale.ROOT, "%s; seen at %.6g Hz with a gain of %.1f dB "
                                 + "(the mode predicts %.1f dB)", what, p.frequencyHz(), g, gainDb));
+                continue;
+            }
+            List<Integer> parts = new ArrayList<>();
+            for (int j = 0; j < seen.size(); j++) {
+                if (claimedBy[j] < 0 && Math.abs(seen.get(j).frequencyHz() - a) <= radius + sourceBinWidth
+                        && seen.get(j).levelDb() + binDb <= ceilingDb) {
+                    parts.add(j);
+                }
+            }
+            if (!parts.isEmpty() && binWidth < sourceBinWidth) {
+                StringBuilder at = new StringBuilder();
+                for (int j : parts) {
+                    claimedBy[j] = i;
+                    at.append(at.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.6g Hz", seen.get(j).frequencyHz()));
+                }
+                fates[i] = new SourceFate(i, Verdict.SPLITS, a, seen.get(parts.get(0)).frequencyHz(), Double.NaN, gainDb,
+                        floor, -1, Double.NaN, 0, String.format(Locale.ROOT, "%s; the source spectrum (bins of %.3g Hz) "
+                                + "held components closer than a bin as this one peak; at this rate's %.3g Hz bins they "
+                                + "come apart: %d peak(s) at %s", what, sourceBinWidth, binWidth, parts.size(), at));
                 continue;
             }
             boolean bound = mode != null && mode.powerGainIsUpperBound() && gainDb <= -BOUND_REMOVES_DB;

@@ -32,7 +32,7 @@
  *                "band": { "low", "high", "lowestAliasFreeRate" } (only when asked) } }
  * </pre>
  * Frequencies in Hz, rates in S/s, levels in dB re 1 unit²/Hz (PSD density), gains in dB of power per bin
- * relative to the source peak; verdicts are {@code survives, folds, removed, buried, hidden, coincides, at-dc,
+ * relative to the source peak; verdicts are {@code survives, folds, removed, buried, hidden, coincides, splits, at-dc,
  * at-nyquist, missing, unexplained} (see {@link org.foldbook.sweep.Verdict}); a
  * number JSON cannot hold (NaN: not seen, never) is {@code null}.
  */
