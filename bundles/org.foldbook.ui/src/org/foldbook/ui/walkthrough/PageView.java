@@ -85,7 +85,17 @@ final class PageView {
             return;
         }
         title.setText(page.title());
-        text.setText(String.join(System.lineSeparator() + System.lineSeparator(), page.paragraphs()));
+        StringBuilder words = new StringBuilder();
+        for (String p : page.paragraphs()) { // a blank line between paragraphs, none inside a list
+            if (!words.isEmpty()) {
+                words.append(System.lineSeparator());
+                if (!p.startsWith("• ")) {
+                    words.append(System.lineSeparator());
+                }
+            }
+            words.append(p);
+        }
+        text.setText(words.toString());
         for (StagePage.Figure f : page.figures()) {
             new TableItem(figures, SWT.NONE).setText(new String[] { f.name(), f.value(), f.how() });
         }
