@@ -230,7 +230,12 @@ public final class Auditor {
                     + welch.segmentLength() + " samples: no spectrum");
             return Optional.empty();
         }
-        return Optional.of(new ChannelSpectrum(sampleRate, welch.binWidth(), psd, fullScale));
+        // the accumulator ran at the notebook's rate; the file's own rate places the bins (density scales by the ratio)
+        double fileRate = s.rateHz() > 0 ? s.rateHz() : sampleRate;
+        for (int k = 0; k < psd.length; k++) {
+            psd[k] *= sampleRate / fileRate;
+        }
+        return Optional.of(new ChannelSpectrum(fileRate, fileRate / welch.segmentLength(), psd, fullScale));
     }
 
     /**
