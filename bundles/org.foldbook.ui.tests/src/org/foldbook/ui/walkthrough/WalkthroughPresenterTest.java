@@ -126,6 +126,8 @@ class WalkthroughPresenterTest {
         Walkthrough w = Walkthrough.of(rig, housing, new WhatIf(51200.0, null), null);
         StagePage daq = w.page(StagePage.Kind.DIGITIZER);
         assertEquals("51.2 kS/s", daq.figure("Sampling rate"));
+        assertEquals("what-if; the notebook says 25600",
+                daq.figures().stream().filter(f -> f.name().equals("Sampling rate")).findFirst().orElseThrow().how());
         assertEquals("25.6 kHz", daq.figure("Nyquist frequency"));
         // everything the front end passes (≤ 32 kHz) lands on 51.2 − 32 = 19.2 kHz and above
         assertEquals("0 – 19.2 kHz (limited by content at 32 kHz)", daq.figure("Alias-free band"));

@@ -12,6 +12,7 @@ import org.foldbook.model.Rig;
 import org.foldbook.model.Sensor;
 import org.foldbook.model.SignalChain;
 import org.foldbook.model.Stage;
+import org.foldbook.model.derived.ChainFigures;
 import org.foldbook.model.derived.Names;
 import org.foldbook.ui.notebook.ChainSummary;
 
@@ -63,10 +64,30 @@ public record Walkthrough(Rig rig, SignalChain chain, SignalChain tried, WhatIf 
                         java.util.Optional.empty(), java.util.Optional.empty(), i);
             });
         }
+        if (!change.isNone()) {
+            pages = pages.stream().map(p -> marked(p, change, chain)).collect(java.util.stream.Collectors.toList());
+        }
         return new Walkthrough(rig, chain, tried, change, channel, pages, new Words(
                 Names.shortName(rig), Names.shortName(chain),
                 chain.getId() != null ? chain.getId() : Names.shortName(chain),
                 ChainSummary.path(tried)));
+    }
+
+    /** The page with the figures the what-if changed saying so, and what the notebook says instead. */
+    private static StagePage marked(StagePage page, WhatIf change, SignalChain chain) {
+        List<StagePage.Figure> figures = page.figures().stream().map(f -> {
+            if (change.rateHz() != null && (f.name().equals("Sampling rate") || f.name().equals("Frame rate"))) {
+                return new StagePage.Figure(f.name(), f.value(), "what-if; the notebook says "
+                        + org.foldbook.model.derived.Quantities.plain(ChainFigures.samplingRateHz(chain)));
+            }
+            if (change.cutoffHz() != null && f.name().equals("Cutoff")) {
+                return new StagePage.Figure(f.name(), f.value(), "what-if; the notebook says "
+                        + org.foldbook.model.derived.Quantities.hz(ChainFigures.effectiveCutoffHz(ChainFigures.filterStage(chain))));
+            }
+            return f;
+        }).toList();
+        return new StagePage(page.kind(), page.title(), page.paragraphs(), figures, page.chart(), page.motion(),
+                page.stageIndex());
     }
 
     /** The walkthrough for a channel: its chain, in the rig that holds the chain. */
