@@ -5,20 +5,22 @@ import java.io.InputStream;
 import java.nio.ByteOrder;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.charset.StandardCharsets;
+import java.util.Locale;
 import java.util.Optional;
 
 import org.foldbook.io.ReadOptions;
+import org.foldbook.io.Recordings;
 import org.foldbook.io.RecordingInfo;
 import org.foldbook.io.RecordingReader;
 import org.foldbook.io.SampleType;
 import org.foldbook.io.raw.RawLayout;
 import org.foldbook.io.raw.RawReader;
-import org.foldbook.io.wav.WavReader;
 import org.foldbook.sweep.StreamingSweep;
 
 /**
- * Reads one channel of a recording for the sweep: WAV (RIFF/RF64, by the io bundle's reader), or raw
- * little-endian float64 when a rate is given and the file is not RIFF. Either into memory (the in-memory
+ * Reads one channel of a recording for the sweep through {@link Recordings#open} (WAV/RF64, HDF5, CSV/TSV,
+ * raw with a layout sidecar), or raw little-endian float64 when a rate is given and the file is none of those. Either into memory (the in-memory
  * engine shares one array between its threads) or, for {@code --stream}, as a block source over the
  * reader's bounded buffer. Other channels are read block by block and dropped.
  */
@@ -26,7 +28,7 @@ final class RecordingLoader {
     private static final int BLOCK = 1 << 16;
 
     /** One channel's samples and its rate. */
-    record Loaded(double[] samples, double rate, String format) {
+    record Loaded(double[] samples, double rate) {
     }
 
     private RecordingLoader() {
@@ -97,29 +99,33 @@ final class RecordingLoader {
         }
     }
 
-    /** Opens the file with the reader its first bytes call for. */
+    /**
+     * Opens the file through {@link Recordings#open} (WAV/RF64, HDF5, raw with a layout sidecar, CSV/TSV);
+     * a file none of them claims is raw little-endian float64 when --rate is given.
+     */
     private static RecordingReader open(Path file, Optional<Double> rawRate) throws IOException {
         if (!Files.isRegularFile(file)) {
             throw new IllegalArgumentException("--input " + file + ": no such file");
         }
-        if (isRiff(file)) {
-            return WavReader.open(file, ReadOptions.DEFAULT.withSha256(false));
-        }
-        if (rawRate.isPresent()) {
+        if (rawRate.isPresent() && !describesItself(file)) {
             RawLayout layout = RawLayout.of(SampleType.FLOAT64, ByteOrder.LITTLE_ENDIAN, 1, true, 0, rawRate.get());
             return RawReader.open(file, layout, ReadOptions.DEFAULT.withSha256(false));
         }
-        throw new IllegalArgumentException("--input " + file
-                + ": not a WAV file; for raw little-endian float64 samples give --rate");
+        if (!describesItself(file)) {
+            throw new IllegalArgumentException("--input " + file + ": not WAV/RF64, HDF5, CSV/TSV or raw with a "
+                    + "layout sidecar (" + RawLayout.sidecarOf(file).getFileName() + "); for raw little-endian "
+                    + "float64 samples give --rate");
+        }
+        return Recordings.open(file, null, ReadOptions.DEFAULT.withSha256(false));
     }
 
     /** The header's facts, checked against --rate and --channel. */
     private static RecordingInfo checked(RecordingReader r, Path file, Optional<Double> rawRate, int channel)
             throws IOException {
         RecordingInfo info = r.info();
-        if (isRiff(file) && rawRate.isPresent() && rawRate.get() != info.sampleRate()) {
-            throw new IllegalArgumentException("--rate " + rawRate.get() + " disagrees with the WAV header's "
-                    + info.sampleRate() + " S/s in " + file);
+        if (describesItself(file) && rawRate.isPresent() && rawRate.get() != info.sampleRate()) {
+            throw new IllegalArgumentException("--rate " + rawRate.get() + " disagrees with the "
+                    + info.sampleRate() + " S/s that " + file + " states");
         }
         if (channel > info.channelCount()) {
             throw new IllegalArgumentException("--channel " + channel + ": " + file + " has " + info.channelCount()
@@ -130,7 +136,6 @@ final class RecordingLoader {
 
     static Loaded load(Path file, Optional<Double> rawRate, int channel) throws IOException {
         RecordingReader reader = open(file, rawRate);
-        String format = isRiff(file) ? "wav" : "raw-f64le";
         try (RecordingReader r = reader) {
             RecordingInfo info = checked(r, file, rawRate, channel);
             int channels = info.channelCount();
@@ -157,18 +162,22 @@ final class RecordingLoader {
             if (n == 0) {
                 throw new IllegalArgumentException("--input " + file + ": no samples");
             }
-            return new Loaded(x, info.sampleRate(), format);
+            return new Loaded(x, info.sampleRate());
         }
     }
 
-    private static boolean isRiff(Path file) throws IOException {
-        byte[] head = new byte[4];
+    /** Whether {@link Recordings#open} finds the file's layout by itself (magic bytes, sidecar, name). */
+    private static boolean describesItself(Path file) throws IOException {
+        byte[] head = new byte[8];
+        int n;
         try (InputStream in = Files.newInputStream(file)) {
-            if (in.readNBytes(head, 0, 4) < 4) {
-                return false;
-            }
+            n = in.readNBytes(head, 0, 8);
         }
-        String tag = new String(head, java.nio.charset.StandardCharsets.US_ASCII);
-        return tag.equals("RIFF") || tag.equals("RF64") || tag.equals("BW64");
+        String tag = new String(head, 0, Math.min(n, 4), StandardCharsets.ISO_8859_1);
+        String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
+        return tag.equals("RIFF") || tag.equals("RF64") || tag.equals("BW64")
+                || (n == 8 && head[0] == (byte) 0x89 && new String(head, 1, 3, StandardCharsets.ISO_8859_1).equals("HDF"))
+                || Files.isRegularFile(RawLayout.sidecarOf(file))
+                || name.endsWith(".csv") || name.endsWith(".tsv") || name.endsWith(".txt");
     }
 }

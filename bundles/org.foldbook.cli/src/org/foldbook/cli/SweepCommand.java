@@ -1,12 +1,12 @@
 package org.foldbook.cli;
 
 import java.io.IOException;
-import java.io.PrintStream;
+import java.io.PrintWriter;
 import java.io.Reader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.concurrent.CancellationException;
+import java.util.concurrent.Callable;
 
 import org.foldbook.dsp.filter.AnalogFilter;
 import org.foldbook.dsp.filter.AnalogLowPass;
@@ -23,55 +23,61 @@ import org.foldbook.sweep.SweepEngine;
 import org.foldbook.sweep.SweepProgress;
 import org.foldbook.sweep.SweepResult;
 
-/** {@code foldbook sweep}: reads a recording and a rate grid, runs the sweep, writes JSON or CSV. */
-final class SweepCommand {
-    private SweepCommand() {
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code foldbook sweep}: reads a recording (through {@code Recordings.open}) or a notebook channel and a
+ * rate grid, runs the stepped-rate simulation, writes JSON or CSV.
+ */
+@Command(name = "sweep", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Stepped-rate simulation: re-samples a recording at a ladder of lower rates and says, for every "
+                + "spectral peak of the source, whether it survives, folds (where to), is removed, buried, hidden or "
+                + "merged. JSON out (layout: org.foldbook.sweep package-info).",
+            "  foldbook sweep --input FILE [--rate HZ] [--channel N] (--grid FILE | --to HZ --steps N | --rates ...)",
+            "  foldbook sweep --notebook FILE --channel NAME [--mode bare|modelled|ideal] [--accept-changed]"},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:done", "2:usage or input error (the message names the option or the file)"})
+final class SweepCommand implements Callable<Integer> {
+    @Mixin
+    SweepOptions o;
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws IOException {
+        o.check();
+        PrintWriter err = spec.commandLine().getErr();
+        if (o.notebook != null) {
+            return NotebookSweep.run(o, spec.commandLine().getOut(), err);
+        }
+        SweepResult result;
+        if (o.stream()) {
+            try (RecordingLoader.Streamed rec = RecordingLoader.stream(o.input(), o.rate(), o.channel());
+                    StreamingSweep engine = new StreamingSweep(o.threads())) {
+                result = engine.run(rec, ladder(o, rec.rate()), mode(o), o.spectrumSettings(), progress(o, err));
+            }
+        } else {
+            RecordingLoader.Loaded rec = RecordingLoader.load(o.input(), o.rate(), o.channel());
+            result = sweep(o, rec, ladder(o, rec.rate()), err);
+        }
+        if (!Double.isNaN(o.bandLow())) {
+            result = result.withBand(o.bandLow(), o.bandHigh());
+        }
+        write(o, result, spec.commandLine().getOut());
+        return Main.OK;
     }
 
-    static int run(String[] args, PrintStream out, PrintStream err) {
-        for (String a : args) {
-            if (a.equals("-h") || a.equals("--help")) {
-                err.print(SweepOptions.USAGE);
-                err.print(NotebookSweep.USAGE);
-                return Main.OK;
-            }
-        }
-        if (NotebookSweep.wanted(args)) {
-            return NotebookSweep.run(args, out, err);
-        }
-        try {
-            SweepOptions o = SweepOptions.parse(args);
-            SweepResult result;
-            if (o.stream()) {
-                try (RecordingLoader.Streamed rec = RecordingLoader.stream(o.input(), o.rate(), o.channel());
-                        StreamingSweep engine = new StreamingSweep(o.threads())) {
-                    result = engine.run(rec, ladder(o, rec.rate()), mode(o), o.spectrumSettings(), progress(o, err));
-                }
-            } else {
-                RecordingLoader.Loaded rec = RecordingLoader.load(o.input(), o.rate(), o.channel());
-                result = sweep(o, rec, ladder(o, rec.rate()), err);
-            }
-            if (!Double.isNaN(o.bandLow())) {
-                result = result.withBand(o.bandLow(), o.bandHigh());
-            }
-            String text = o.format().equals("csv") ? result.toCsv() : result.toJson() + "\n";
-            if (o.output().isPresent()) {
-                Files.writeString(o.output().get(), text, StandardCharsets.UTF_8);
-            } else {
-                out.print(text);
-                out.flush();
-            }
-            return Main.OK;
-        } catch (IllegalArgumentException e) {
-            err.println("foldbook sweep: " + e.getMessage());
-            err.println("run 'foldbook sweep --help' for the options");
-            return Main.BAD_INPUT;
-        } catch (CancellationException e) {
-            err.println("foldbook sweep: cancelled");
-            return Main.CANCELLED;
-        } catch (IOException e) {
-            err.println("foldbook sweep: " + e.getMessage());
-            return Main.IO_ERROR;
+    /** The result as JSON or CSV, to --output or standard output. */
+    static void write(SweepOptions o, SweepResult result, PrintWriter out) throws IOException {
+        String text = o.format().equals("csv") ? result.toCsv() : result.toJson() + "\n";
+        if (o.output().isPresent()) {
+            Files.writeString(o.output().get(), text, StandardCharsets.UTF_8);
+        } else {
+            out.print(text);
+            out.flush();
         }
     }
 
@@ -157,7 +163,7 @@ final class SweepCommand {
         };
     }
 
-    private static SweepResult sweep(SweepOptions o, RecordingLoader.Loaded rec, RateLadder ladder, PrintStream err) {
+    private static SweepResult sweep(SweepOptions o, RecordingLoader.Loaded rec, RateLadder ladder, PrintWriter err) {
         Resampling mode = mode(o);
         SourceSpectrum ref = SourceSpectrum.of(rec.samples(), rec.rate(), o.spectrumSettings());
         if (o.mode().equals("preview")) {
@@ -168,7 +174,7 @@ final class SweepCommand {
         }
     }
 
-    private static SweepProgress progress(SweepOptions o, PrintStream err) {
+    static SweepProgress progress(SweepOptions o, PrintWriter err) {
         return o.quiet() ? SweepProgress.NONE : new SweepProgress() {
             @Override
             public synchronized void rateDone(RateResult r, int done, int total) {
