@@ -72,6 +72,10 @@ public final class ChannelReader {
         try (RecordingReader reader = open(file, recording)) {
             RecordingInfo info = reader.info();
             checkAgainstNotebook(file, info, channel, recording);
+            if (info.frameCount() > Integer.MAX_VALUE - 8) {
+                throw new ChannelDataException(file, info.frameCount() + " frames: more than one array holds"
+                        + " (ChannelScan.scan reads it block by block)");
+            }
             double[] samples = readChannel(reader, info, channel.getChannelIndex(), file, progress);
             String sha = reader.sha256Hex().toLowerCase(Locale.ROOT);
             String logged = recording.getSha256();
@@ -144,7 +148,7 @@ public final class ChannelReader {
      * a time column takes the notebook's declared rate. A file of another family than the logged one is
      * an error: the notebook and the file disagree about what the recording is.
      */
-    private static RecordingReader open(Path file, Recording recording) throws IOException {
+    static RecordingReader open(Path file, Recording recording) throws IOException {
         RecordingFormat logged = recording.getFormat();
         RecordingDescriptor selection = RecordingFormats.readerSelection(logged);
         RecordingReader reader;
@@ -167,7 +171,7 @@ public final class ChannelReader {
         return reader;
     }
 
-    private static void checkAgainstNotebook(Path file, RecordingInfo info, Channel channel, Recording recording)
+    static void checkAgainstNotebook(Path file, RecordingInfo info, Channel channel, Recording recording)
             throws ChannelDataException {
         int index = channel.getChannelIndex();
         if (index < 0 || index >= info.channelCount()) {
@@ -185,9 +189,6 @@ public final class ChannelReader {
         }
         if (info.frameCount() < 1) {
             throw new ChannelDataException(file, "holds no samples");
-        }
-        if (info.frameCount() > Integer.MAX_VALUE - 8) {
-            throw new ChannelDataException(file, info.frameCount() + " frames: more than one array holds");
         }
     }
 
