@@ -79,6 +79,53 @@ class FoldExplorerPartTest {
         assertTrue(status.getText().contains("not a number"), status.getText());
     }
 
+    @Test
+    void followsTheSelectedChannelsPeaksRateAndChain(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws java.io.IOException {
+        var document = org.foldbook.ui.notebook.NotebookDocument.load(org.foldbook.model.demo.GearboxDemo.write(dir));
+        try {
+            var current = new org.foldbook.ui.notebook.CurrentNotebook();
+            current.open(document);
+            FoldExplorerPart part = new FoldExplorerPart();
+            part.current = current;
+            part.createControls(shell);
+            org.foldbook.model.Channel housing = document.notebook().getExperiments().get(0).getChannels().get(0);
+            assertEquals("housing Z", housing.getName());
+            current.select(housing);
+            long end = System.nanoTime() + 120_000_000_000L;
+            while (part.job() != null) {
+                assertTrue(System.nanoTime() < end, "reading the peaks did not finish");
+                if (!display.readAndDispatch()) {
+                    display.sleep();
+                }
+            }
+            Text[] fields = findAll(shell, Text.class);
+            assertEquals("25600.0", fields[1].getText(), "the channel's rate (GearboxDemo: 25.6 kS/s)");
+            Table table = find(shell, Table.class);
+            assertEquals(FoldExplorerPart.SOURCE_PEAKS, table.getItemCount());
+            boolean mesh = false;
+            boolean alias = false;
+            for (var item : table.getItems()) {
+                double f = Double.parseDouble(item.getText(0));
+                mesh |= Math.abs(f - 906.5) < 0.5; // 37 teeth × 24.5 Hz
+                if (Math.abs(f - 10189.5) < 2) { // 17 × 906.5 = 15 410.5 Hz folded at 25.6 kS/s: 25 600 − 15 410.5
+                    alias = true;
+                    // 4-pole Butterworth at 10 kHz: 10·log10(1 + (f/fc)^8) dB (Butterworth magnitude, any filter handbook)
+                    double expected = 10 * Math.log10(1 + Math.pow(f / 10000, 8));
+                    assertEquals(expected, Double.parseDouble(item.getText(4)), 0.06, "chain attenuation at " + f);
+                }
+            }
+            assertTrue(mesh, "the 906.5 Hz mesh is a source peak");
+            assertTrue(alias, "the folded 17th mesh harmonic is a source peak of the recording");
+            Chart chart = find(shell, Chart.class);
+            // eight tone curves, the Nyquist line, the chosen rate and the channel's rate
+            assertEquals(FoldExplorerPart.SOURCE_PEAKS + 3, chart.getSeriesSet().getSeries().length);
+            part.dispose();
+        } finally {
+            document.dispose();
+        }
+    }
+
     private static <T extends Control> T find(Control root, Class<T> type) {
         return find(root, type, c -> true);
     }

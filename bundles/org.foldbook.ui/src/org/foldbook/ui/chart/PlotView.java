@@ -2,36 +2,52 @@ package org.foldbook.ui.chart;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.BiConsumer;
 
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.events.PaintEvent;
 import org.eclipse.swt.graphics.Color;
+import org.eclipse.swt.graphics.GC;
 import org.eclipse.swt.graphics.RGB;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swtchart.Chart;
 import org.eclipse.swtchart.IAxis;
+import org.eclipse.swtchart.ICustomPaintListener;
 import org.eclipse.swtchart.ILineSeries;
 import org.eclipse.swtchart.ILineSeries.PlotSymbolType;
 import org.eclipse.swtchart.ISeries.SeriesType;
 import org.eclipse.swtchart.LineStyle;
 import org.eclipse.swtchart.Range;
+import org.foldbook.ui.export.ChartData;
+import org.foldbook.ui.export.ExportMenu;
 
 /**
  * Foldbook's one chart viewer: every view draws through it, so axes, colours and line styles look
  * the same everywhere. It wraps SWTChart and exposes only what our views need (named x/y lines,
- * markers, fixed or automatic ranges). Colours it allocates are disposed with the control.
+ * markers, points, fixed or automatic ranges, a log frequency axis, a cursor). It keeps the numbers it
+ * shows, so every chart exports them (context menu: PNG, SVG, CSV, JSON; see {@link ExportMenu}).
+ * Colours it allocates are disposed with the control.
  */
 public final class PlotView {
     /** Our palette: distinguishable in print and for common colour-vision deficiencies. */
     private static final RGB[] PALETTE = {
         new RGB(0, 90, 181), new RGB(220, 50, 32), new RGB(0, 140, 90), new RGB(150, 60, 170),
         new RGB(230, 140, 0), new RGB(60, 60, 60), new RGB(0, 160, 200), new RGB(170, 110, 60)};
+    private static final RGB MARKER_GREY = new RGB(96, 96, 96);
 
     private final Chart chart;
+    private final String title;
+    private final String xTitle;
+    private String yTitle;
     private final List<Color> colours = new ArrayList<>();
+    private final List<ChartData.Series> shown = new ArrayList<>();
     private final List<Band> bands = new ArrayList<>();
     private int nextColour;
 
     public PlotView(Composite parent, String title, String xTitle, String yTitle) {
+        this.title = title;
+        this.xTitle = xTitle;
+        this.yTitle = yTitle;
         chart = new Chart(parent, SWT.NONE);
         chart.getTitle().setText(title);
         chart.getAxisSet().getXAxis(0).getTitle().setText(xTitle);
@@ -39,9 +55,9 @@ public final class PlotView {
         chart.setBackground(parent.getDisplay().getSystemColor(SWT.COLOR_WHITE));
         chart.getPlotArea().setBackground(parent.getDisplay().getSystemColor(SWT.COLOR_WHITE));
         chart.addDisposeListener(e -> colours.forEach(Color::dispose));
-        chart.getPlotArea().addCustomPaintListener(new org.eclipse.swtchart.ICustomPaintListener() {
+        chart.getPlotArea().addCustomPaintListener(new ICustomPaintListener() {
             @Override
-            public void paintControl(org.eclipse.swt.events.PaintEvent e) {
+            public void paintControl(PaintEvent e) {
                 paintBands(e.gc);
             }
 
@@ -50,11 +66,14 @@ public final class PlotView {
                 return true;
             }
         });
+        ExportMenu.attach(this);
     }
 
     /** Shades the x interval [lowX, highX] over the plot's height, lightly, in palette colour {@code index}. */
     public void addBand(double lowX, double highX, int index) {
-        bands.add(new Band(lowX, highX, palette(index)));
+        Color colour = new Color(chart.getDisplay(), PALETTE[index % PALETTE.length]);
+        colours.add(colour);
+        bands.add(new Band(lowX, highX, colour));
     }
 
     /** How many bands are shaded (tests). */
@@ -65,7 +84,7 @@ public final class PlotView {
     private record Band(double lowX, double highX, Color colour) {
     }
 
-    private void paintBands(org.eclipse.swt.graphics.GC gc) {
+    private void paintBands(GC gc) {
         IAxis xAxis = chart.getAxisSet().getXAxis(0);
         int height = chart.getPlotArea().getSize().y;
         int alpha = gc.getAlpha();
@@ -84,56 +103,82 @@ public final class PlotView {
         return chart;
     }
 
+    public String title() {
+        return title;
+    }
+
+    /** Changes the y axis title (e.g. when the level unit changes). */
+    public void setYTitle(String text) {
+        yTitle = text;
+        chart.getAxisSet().getYAxis(0).getTitle().setText(text);
+    }
+
     /** Removes every line; the next line gets the first palette colour again. */
     public void clear() {
         for (var s : chart.getSeriesSet().getSeries()) {
             chart.getSeriesSet().deleteSeries(s.getId());
         }
+        shown.clear();
         bands.clear();
         nextColour = 0;
     }
 
     /** Adds a solid line through the given points, in the next palette colour. */
     public void addLine(String name, double[] x, double[] y) {
-        line(name, x, y, LineStyle.SOLID, 2, palette(nextColour++));
+        RGB rgb = PALETTE[nextColour++ % PALETTE.length];
+        line(name, x, y, LineStyle.SOLID, 2, rgb, PlotSymbolType.NONE, ChartData.Style.LINE);
     }
 
     /** Adds a line in the palette colour {@code index} (two lines of one thing share a colour). */
     public void addLine(String name, double[] x, double[] y, int index, int width) {
-        line(name, x, y, LineStyle.SOLID, width, palette(index));
+        line(name, x, y, LineStyle.SOLID, width, PALETTE[index % PALETTE.length], PlotSymbolType.NONE,
+                ChartData.Style.LINE);
     }
 
-    /** Adds points without a line (marked peaks, frames), in palette colour {@code index}, each with its label. */
+    /** Adds a thin dashed reference line (a limit, a marker) in grey. */
+    public void addMarker(String name, double[] x, double[] y) {
+        line(name, x, y, LineStyle.DASH, 1, MARKER_GREY, PlotSymbolType.NONE, ChartData.Style.MARKER);
+    }
+
+    /** Adds points without a line (marked peaks), in palette colour {@code index}, each with its label. */
     public void addPoints(String name, double[] x, double[] y, int index, String[] labels) {
-        Color colour = palette(index);
-        ILineSeries<?> s = line(name, x, y, LineStyle.NONE, 1, colour);
-        s.setSymbolType(PlotSymbolType.CIRCLE);
-        s.setSymbolColor(colour);
-        s.setSymbolSize(4);
+        ILineSeries<?> s = line(name, x, y, LineStyle.NONE, 1, PALETTE[index % PALETTE.length],
+                PlotSymbolType.CIRCLE, ChartData.Style.POINTS);
         if (labels != null) {
             s.getLabel().setFormats(labels);
             s.getLabel().setVisible(true);
         }
     }
 
-    /** Adds a thin dashed reference line (a limit, a marker) in grey. */
-    public void addMarker(String name, double[] x, double[] y) {
-        line(name, x, y, LineStyle.DASH, 1, chart.getDisplay().getSystemColor(SWT.COLOR_DARK_GRAY));
-    }
-
-    private ILineSeries<?> line(String name, double[] x, double[] y, LineStyle style, int width, Color colour) {
-        if (x.length != y.length) {
-            throw new IllegalArgumentException("line '" + name + "': " + x.length + " x values but " + y.length + " y values");
-        }
+    private ILineSeries<?> line(String name, double[] x, double[] y, LineStyle style, int width, RGB rgb,
+            PlotSymbolType symbol, ChartData.Style kind) {
+        ChartData.Series data = new ChartData.Series(name, x.clone(), y.clone(), kind,
+                (rgb.red << 16) | (rgb.green << 8) | rgb.blue);
+        Color colour = new Color(chart.getDisplay(), rgb);
+        colours.add(colour);
         ILineSeries<?> series = (ILineSeries<?>) chart.getSeriesSet().createSeries(SeriesType.LINE, name);
         series.setXSeries(x);
         series.setYSeries(y);
         series.setLineStyle(style);
         series.setLineWidth(width);
         series.setLineColor(colour);
-        series.setSymbolType(PlotSymbolType.NONE);
+        series.setSymbolType(symbol);
+        if (symbol != PlotSymbolType.NONE) {
+            series.setSymbolColor(colour);
+            series.setSymbolSize(4);
+        }
         series.setAntialias(SWT.ON);
+        shown.add(data);
         return series;
+    }
+
+    /** A logarithmic or linear x axis; every x shown must then be positive. */
+    public void setLogX(boolean log) {
+        chart.getAxisSet().getXAxis(0).enableLogScale(log);
+    }
+
+    public boolean isLogX() {
+        return chart.getAxisSet().getXAxis(0).isLogScaleEnabled();
     }
 
     /** Fixes both axis ranges (null keeps the automatic range of that axis), then redraws. */
@@ -150,9 +195,18 @@ public final class PlotView {
         chart.redraw();
     }
 
-    private Color palette(int index) {
-        Color c = new Color(chart.getDisplay(), PALETTE[index % PALETTE.length]);
-        colours.add(c);
-        return c;
+    /** Tells {@code listener} the data coordinates (x, y) under the mouse in the plot area. */
+    public void onCursor(BiConsumer<Double, Double> listener) {
+        chart.getPlotArea().addMouseMoveListener(e -> listener.accept(
+                chart.getAxisSet().getXAxis(0).getDataCoordinate(e.x),
+                chart.getAxisSet().getYAxis(0).getDataCoordinate(e.y)));
+    }
+
+    /** The numbers shown now, titles and ranges: what the exports write. */
+    public ChartData data() {
+        Range x = chart.getAxisSet().getXAxis(0).getRange();
+        Range y = chart.getAxisSet().getYAxis(0).getRange();
+        return new ChartData(title, xTitle, yTitle, shown, isLogX(), new double[] {x.lower, x.upper},
+                new double[] {y.lower, y.upper});
     }
 }

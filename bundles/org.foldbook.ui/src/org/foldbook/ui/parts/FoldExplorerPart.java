@@ -3,7 +3,9 @@ package org.foldbook.ui.parts;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.Consumer;
 
+import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.jface.layout.GridDataFactory;
 import org.eclipse.jface.layout.GridLayoutFactory;
 import org.eclipse.swt.SWT;
@@ -15,17 +17,39 @@ import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swt.widgets.Text;
 import org.eclipse.swtchart.Range;
 import org.foldbook.dsp.NumberText;
+import org.foldbook.dsp.peaks.SpectralPeak;
+import org.foldbook.model.Channel;
+import org.foldbook.model.derived.ChainModel;
 import org.foldbook.ui.chart.PlotView;
+import org.foldbook.ui.export.ExportMenu;
+import org.foldbook.ui.notebook.CurrentNotebook;
+import org.foldbook.ui.recording.ReadRecordingJob;
+import org.foldbook.ui.recording.RecordingOverview;
+import org.foldbook.ui.recording.RecordingPresenter;
 
 import jakarta.annotation.PostConstruct;
+import jakarta.annotation.PreDestroy;
+import jakarta.inject.Inject;
 
 /**
  * Fold explorer: for a few tones and a sample rate, where each tone appears after sampling and
  * whether it is still at its true frequency. The chart shows apparent frequency against sample rate
  * (the zig-zag each tone draws as the rate falls) with the Nyquist line and the chosen rate; the
  * table gives the figures at the chosen rate. Input errors are shown in the part, never thrown.
+ *
+ * <p>It follows the channel selected in the Notebook part: the tones become the source peaks of the
+ * channel's recording (its strongest spectral peaks, read in a background job), the rate the channel's,
+ * marked on the chart, and a second chart shows the chain's attenuation of each tone along its fold path
+ * ({@link ChainModel#protection}); the table gives it at the chosen rate. The example tones below are
+ * shown only until a channel is selected.
  */
 public class FoldExplorerPart {
+    /** Source peaks taken from a channel's spectrum, strongest first. */
+    static final int SOURCE_PEAKS = 8;
+
+    @Inject
+    @Optional
+    CurrentNotebook current;
     /** Our own opening scenario: a gearbox test with mesh tones up to 39 kHz, digitized at 48 kS/s. */
     static final String DEFAULT_TONES = "1000, 4700, 13300, 27100, 38900";
     static final String DEFAULT_RATE = "48000";
@@ -35,6 +59,14 @@ public class FoldExplorerPart {
     private Label status;
     private Table table;
     private PlotView plot;
+    private PlotView attenuation;
+    private Label source;
+    private final Consumer<Object> onSelection = this::follow;
+    /** The channel whose peaks are shown, its chain and rate; null: the typed tones alone. */
+    private Channel channel;
+    private ChainModel chain;
+    private double channelRate = Double.NaN;
+    private ReadRecordingJob job;
 
     @PostConstruct
     public void createControls(Composite parent) {
@@ -55,23 +87,114 @@ public class FoldExplorerPart {
 
         status = new Label(inputs, SWT.WRAP);
         GridDataFactory.fillDefaults().span(2, 1).grab(true, false).hint(360, SWT.DEFAULT).applyTo(status);
+        // after the status label, which stays the first wrapping label of the part
+        source = new Label(inputs, SWT.WRAP);
+        source.setText("Example tones (a gearbox at 48 kS/s); select a channel in the Notebook part to use its peaks.");
+        GridDataFactory.fillDefaults().span(2, 1).grab(true, false).hint(360, SWT.DEFAULT).applyTo(source);
 
         table = new Table(inputs, SWT.BORDER | SWT.FULL_SELECTION);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
-        for (String title : new String[] {"Tone (Hz)", "Appears at (Hz)", "Zone", "Seen as"}) {
+        for (String title : new String[] {"Tone (Hz)", "Appears at (Hz)", "Zone", "Seen as", "Chain (dB)"}) {
             TableColumn c = new TableColumn(table, SWT.LEFT);
             c.setText(title);
-            c.setWidth(title.startsWith("Appears") ? 120 : 80);
+            c.setWidth(title.startsWith("Appears") ? 110 : 72);
         }
         GridDataFactory.fillDefaults().span(2, 1).grab(true, true).applyTo(table);
+        ExportMenu.attach(table, "Fold explorer");
 
-        plot = new PlotView(parent, "Apparent frequency against sample rate", "Sample rate (S/s)", "Apparent frequency (Hz)");
+        Composite charts = new Composite(parent, SWT.NONE);
+        GridLayoutFactory.fillDefaults().numColumns(2).equalWidth(true).spacing(8, 0).applyTo(charts);
+        GridDataFactory.fillDefaults().grab(true, true).applyTo(charts);
+        plot = new PlotView(charts, "Apparent frequency against sample rate", "Sample rate (S/s)", "Apparent frequency (Hz)");
         GridDataFactory.fillDefaults().grab(true, true).applyTo(plot.control());
+        attenuation = new PlotView(charts, "Chain attenuation along each fold path", "Sample rate (S/s)",
+                "Attenuation (dB)");
+        GridDataFactory.fillDefaults().grab(true, true).applyTo(attenuation.control());
 
         tonesField.addModifyListener(e -> refresh());
         rateField.addModifyListener(e -> refresh());
         refresh();
+        if (current != null) {
+            current.addSelectionListener(onSelection);
+            follow(current.selection());
+        }
+    }
+
+    /** Takes the tones from the channel {@code selection} stands for (other selections change nothing). */
+    public void follow(Object selection) {
+        Channel next = RecordingPresenter.channelOf(selection);
+        if (next == null || next == channel) {
+            return;
+        }
+        if (job != null) {
+            job.cancel();
+        }
+        channel = next;
+        chain = next.getChain() == null ? null : ChainModel.of(next.getChain());
+        source.setText("Reading the peaks of channel '" + next.getName() + "' …");
+        ReadRecordingJob read = new ReadRecordingJob(next, perMille -> { },
+                overview -> ui(() -> showPeaks(next, overview)),
+                problem -> ui(() -> showProblem(next, problem)),
+                () -> ui(() -> showProblem(next, "reading was cancelled")));
+        job = read;
+        read.schedule();
+    }
+
+    /** The read of the selected channel's peaks, or null. */
+    ReadRecordingJob job() {
+        return job;
+    }
+
+    private void showPeaks(Channel of, RecordingOverview overview) {
+        if (of != channel) {
+            return;
+        }
+        job = null;
+        List<SpectralPeak> peaks = new ArrayList<>(overview.peaks());
+        peaks.sort((a, b) -> Double.compare(b.levelDb(), a.levelDb()));
+        StringBuilder tones = new StringBuilder();
+        for (SpectralPeak p : peaks.subList(0, Math.min(SOURCE_PEAKS, peaks.size()))) {
+            tones.append(tones.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.2f", p.frequencyHz()));
+        }
+        channelRate = overview.rateHz();
+        source.setText(String.format(Locale.ROOT, "Source peaks of channel '%s': the %d strongest of its recording "
+                + "%s, recorded at %.6g S/s (marked). Attenuation: chain %s at each rate.", of.getName(),
+                Math.min(SOURCE_PEAKS, peaks.size()), overview.file().getFileName(), channelRate,
+                chain == null ? "(none)" : chain.chainId()));
+        tonesField.setText(tones.length() == 0 ? "" : tones.toString());
+        rateField.setText(String.format(Locale.ROOT, "%.6g", channelRate));
+        refresh();
+    }
+
+    private void showProblem(Channel of, String problem) {
+        if (of != channel) {
+            return;
+        }
+        job = null;
+        source.setText("No peaks from channel '" + of.getName() + "': " + problem);
+        source.getParent().layout();
+    }
+
+    private void ui(Runnable r) {
+        if (source.isDisposed()) {
+            return;
+        }
+        source.getDisplay().asyncExec(() -> {
+            if (!source.isDisposed()) {
+                r.run();
+            }
+        });
+    }
+
+    @PreDestroy
+    public void dispose() {
+        if (job != null) {
+            job.cancel();
+        }
+        if (current != null) {
+            current.removeSelectionListener(onSelection);
+        }
     }
 
     private void refresh() {
@@ -85,14 +208,15 @@ public class FoldExplorerPart {
             status.getParent().layout();
             return;
         }
-        FoldExplorerModel model = new FoldExplorerModel(tones, rate);
+        FoldExplorerModel model = new FoldExplorerModel(tones, rate, chain == null ? null : chain::protection);
         status.setText(String.format(Locale.ROOT, "Nyquist frequency %.6g Hz. %d of %d tones fold.",
                 rate / 2, model.foldedCount(), tones.length));
         table.removeAll();
         for (FoldExplorerModel.Row row : model.rows()) {
             TableItem item = new TableItem(table, SWT.NONE);
             item.setText(new String[] {fmt(row.toneHz()), fmt(row.apparentHz()), Long.toString(row.zone()),
-                    row.folded() ? "alias" : "true"});
+                    row.folded() ? "alias" : "true", model.hasChain() ? String.format(Locale.ROOT, "%.1f",
+                            row.attenuationDb()) : "no chain"});
         }
         plot.clear();
         for (int i = 0; i < tones.length; i++) {
@@ -103,7 +227,21 @@ public class FoldExplorerPart {
         plot.addMarker("Nyquist", nyq[0], nyq[1]);
         double top = model.maxRate() / 2;
         plot.addMarker("chosen rate", new double[] {rate, rate}, new double[] {0, top});
+        if (Double.isFinite(channelRate)) {
+            plot.addMarker("channel's rate", new double[] {channelRate, channelRate}, new double[] {0, top});
+        }
         plot.setRanges(new Range(model.minRate(), model.maxRate()), new Range(0, top * 1.02));
+        attenuation.clear();
+        double highest = 10;
+        for (int i = 0; i < tones.length; i++) {
+            double[][] xy = model.attenuationCurve(i);
+            attenuation.addLine(fmt(tones[i]) + " Hz", xy[0], xy[1]);
+            for (double a : xy[1]) {
+                highest = Math.max(highest, Math.min(a, 200));
+            }
+        }
+        attenuation.addMarker("chosen rate", new double[] {rate, rate}, new double[] {0, highest});
+        attenuation.setRanges(new Range(model.minRate(), model.maxRate()), new Range(-1, highest * 1.05));
         status.getParent().layout();
     }
 

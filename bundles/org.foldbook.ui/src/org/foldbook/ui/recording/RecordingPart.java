@@ -1,0 +1,261 @@
+package org.foldbook.ui.recording;
+
+import java.util.List;
+import java.util.function.Consumer;
+
+import org.eclipse.e4.core.di.annotations.Optional;
+import org.eclipse.e4.ui.di.UISynchronize;
+import org.eclipse.jface.layout.GridDataFactory;
+import org.eclipse.jface.layout.GridLayoutFactory;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Combo;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.ProgressBar;
+import org.eclipse.swt.widgets.Table;
+import org.eclipse.swt.widgets.TableColumn;
+import org.eclipse.swt.widgets.TableItem;
+import org.eclipse.swtchart.Range;
+import org.foldbook.model.Channel;
+import org.foldbook.ui.chart.PlotView;
+import org.foldbook.ui.export.ExportMenu;
+import org.foldbook.ui.notebook.CurrentNotebook;
+
+import jakarta.annotation.PostConstruct;
+import jakarta.annotation.PreDestroy;
+import jakarta.inject.Inject;
+
+/**
+ * The recording view: the channel selected in the Notebook part, read from its file in a background job —
+ * a min/max overview of the whole recording over time and its Welch spectrum in the sensor's units, peaks
+ * marked and listed, a readout under the mouse. Only draws; {@link RecordingPresenter} decides what.
+ */
+public class RecordingPart {
+    @Inject
+    @Optional
+    UISynchronize sync;
+    @Inject
+    @Optional
+    CurrentNotebook current;
+
+    final RecordingPresenter presenter = new RecordingPresenter();
+    private final Consumer<Object> onSelection = this::follow;
+    Label header;
+    Label message;
+    Combo levels;
+    Button logAxis;
+    Button reread;
+    Button cancel;
+    ProgressBar progress;
+    PlotView envelope;
+    PlotView spectrum;
+    Table peaks;
+    Label cursor;
+    private Composite charts;
+    private ReadRecordingJob job;
+
+    @PostConstruct
+    public void createControls(Composite parent) {
+        GridLayoutFactory.fillDefaults().margins(8, 8).spacing(6, 6).applyTo(parent);
+        header = new Label(parent, SWT.WRAP);
+        GridDataFactory.fillDefaults().grab(true, false).hint(600, SWT.DEFAULT).applyTo(header);
+
+        Composite bar = new Composite(parent, SWT.NONE);
+        GridLayoutFactory.fillDefaults().numColumns(6).spacing(8, 0).applyTo(bar);
+        GridDataFactory.fillDefaults().grab(true, false).applyTo(bar);
+        new Label(bar, SWT.NONE).setText("Levels:");
+        levels = new Combo(bar, SWT.READ_ONLY);
+        GridDataFactory.fillDefaults().hint(240, SWT.DEFAULT).applyTo(levels);
+        logAxis = new Button(bar, SWT.CHECK);
+        logAxis.setText("Log frequency axis");
+        reread = new Button(bar, SWT.PUSH);
+        reread.setText("Read again");
+        progress = new ProgressBar(bar, SWT.HORIZONTAL);
+        progress.setMaximum(1000);
+        GridDataFactory.fillDefaults().grab(true, false).applyTo(progress);
+        cancel = new Button(bar, SWT.PUSH);
+        cancel.setText("Cancel reading");
+        cancel.setEnabled(false);
+
+        message = new Label(parent, SWT.WRAP);
+        GridDataFactory.fillDefaults().grab(true, false).hint(600, SWT.DEFAULT).applyTo(message);
+
+        charts = new SashForm(parent, SWT.VERTICAL);
+        GridDataFactory.fillDefaults().grab(true, true).applyTo(charts);
+        envelope = new PlotView(charts, "Whole recording (min/max per column)", "Time (s)", "Value");
+        Composite lower = new Composite(charts, SWT.NONE);
+        GridLayoutFactory.fillDefaults().numColumns(2).spacing(6, 2).applyTo(lower);
+        spectrum = new PlotView(lower, "Spectrum (Welch, rms per line)", "Frequency (Hz)", "Level");
+        GridDataFactory.fillDefaults().grab(true, true).applyTo(spectrum.control());
+        peaks = new Table(lower, SWT.BORDER | SWT.FULL_SELECTION);
+        peaks.setHeaderVisible(true);
+        peaks.setLinesVisible(true);
+        for (String title : new String[] {"Peak (Hz)", "Level", "dBFS"}) {
+            TableColumn c = new TableColumn(peaks, SWT.RIGHT);
+            c.setText(title);
+            c.setWidth(title.equals("dBFS") ? 60 : 90);
+        }
+        GridDataFactory.fillDefaults().grab(false, true).hint(250, SWT.DEFAULT).applyTo(peaks);
+        ExportMenu.attach(peaks, "Spectral peaks");
+        cursor = new Label(lower, SWT.NONE);
+        GridDataFactory.fillDefaults().span(2, 1).grab(true, false).applyTo(cursor);
+        ((SashForm) charts).setWeights(35, 65);
+
+        levels.addListener(SWT.Selection, e -> {
+            List<RecordingPresenter.Levels> choices = presenter.choices();
+            int i = levels.getSelectionIndex();
+            if (i >= 0 && i < choices.size()) {
+                presenter.setLevels(choices.get(i));
+                render();
+            }
+        });
+        logAxis.addListener(SWT.Selection, e -> {
+            presenter.setLogFrequency(logAxis.getSelection());
+            render();
+        });
+        reread.addListener(SWT.Selection, e -> follow(presenter.channel()));
+        cancel.addListener(SWT.Selection, e -> cancelReading());
+        spectrum.onCursor((x, y) -> cursor.setText(presenter.cursorText(x)));
+
+        if (current != null) {
+            current.addSelectionListener(onSelection);
+            follow(current.selection());
+        } else {
+            render();
+        }
+    }
+
+    /** Shows the channel {@code selection} stands for (nothing when it is not a channel). */
+    public void follow(Object selection) {
+        Channel channel = RecordingPresenter.channelOf(selection);
+        if (channel == null && presenter.channel() != null && selection != null) {
+            return; // a rig or chain selected: keep showing the last channel
+        }
+        cancelReading();
+        presenter.follow(channel);
+        render();
+        if (channel != null) {
+            start(channel);
+        }
+    }
+
+    private void start(Channel channel) {
+        ReadRecordingJob next = new ReadRecordingJob(channel,
+                perMille -> ui(() -> progress.setSelection((int) perMille)),
+                overview -> finished(channel, () -> presenter.showOverview(overview)),
+                problem -> finished(channel, () -> presenter.showProblem(problem)),
+                () -> finished(channel, () -> presenter.showProblem("Reading channel '" + channel.getName()
+                        + "' was cancelled; press Read again to read it.")));
+        job = next;
+        progress.setSelection(0);
+        cancel.setEnabled(true);
+        next.schedule();
+    }
+
+    /** Applies a job's outcome on the UI thread, unless another channel was selected meanwhile. */
+    private void finished(Channel channel, Runnable apply) {
+        ui(() -> {
+            if (presenter.channel() == channel) {
+                apply.run();
+                job = null;
+                cancel.setEnabled(false);
+                render();
+            }
+        });
+    }
+
+    /** Asks the running read to stop (its cancellation shows in the part). */
+    public void cancelReading() {
+        if (job != null) {
+            job.cancel();
+        }
+    }
+
+    /** The running read, or null. */
+    ReadRecordingJob job() {
+        return job;
+    }
+
+    private void ui(Runnable r) {
+        if (header.isDisposed()) {
+            return;
+        }
+        if (sync != null) {
+            sync.asyncExec(() -> {
+                if (!header.isDisposed()) {
+                    r.run();
+                }
+            });
+        } else {
+            header.getDisplay().asyncExec(() -> {
+                if (!header.isDisposed()) {
+                    r.run();
+                }
+            });
+        }
+    }
+
+    private void render() {
+        RecordingOverview o = presenter.overview();
+        message.setText(presenter.message() == null ? "" : presenter.message());
+        header.setText(o == null ? (presenter.channel() == null ? "Recording" : "Channel '"
+                + presenter.channel().getName() + "'") : presenter.header());
+        levels.removeAll();
+        for (RecordingPresenter.Levels l : presenter.choices()) {
+            levels.add(presenter.label(l));
+        }
+        levels.select(Math.max(0, presenter.choices().indexOf(presenter.levels())));
+        envelope.clear();
+        spectrum.clear();
+        peaks.removeAll();
+        cursor.setText("");
+        if (o != null) {
+            double[][] env = presenter.envelopeLine();
+            envelope.setYTitle(presenter.envelopeUnit());
+            envelope.addLine(o.channelName(), env[0], env[1], 0, 1);
+            envelope.setRanges(new Range(0, o.durationSeconds()), null);
+            double[][] line = presenter.spectrumLine();
+            spectrum.setLogX(false);
+            spectrum.setYTitle(presenter.unitOfLevels());
+            spectrum.addLine("spectrum", line[0], line[1], 0, 1);
+            double[][] marked = presenter.peakPoints();
+            List<String[]> rows = presenter.peakRows();
+            String[] labels = rows.stream().map(r -> r[0] + " Hz").toArray(String[]::new);
+            spectrum.addPoints("peaks", marked[0], marked[1], 1, labels);
+            for (String[] r : rows) {
+                new TableItem(peaks, SWT.NONE).setText(r);
+            }
+            peaks.getColumn(1).setText(presenter.unitOfLevels());
+            double lo = presenter.logFrequency() ? o.spectrum().binWidth() : 0;
+            spectrum.setLogX(presenter.logFrequency());
+            spectrum.setRanges(new Range(lo, o.rateHz() / 2), yRange(line[1]));
+        }
+        envelope.control().redraw();
+        spectrum.control().redraw();
+        header.getParent().layout(true, true);
+    }
+
+    /** Levels from 100 dB below the highest (the noise of a 16-bit file and more) to 10 dB above it. */
+    private Range yRange(double[] y) {
+        double max = Double.NEGATIVE_INFINITY;
+        double min = Double.POSITIVE_INFINITY;
+        for (double v : y) {
+            max = Math.max(max, v);
+            min = Math.min(min, v);
+        }
+        if (presenter.levels() == RecordingPresenter.Levels.LINEAR) {
+            return new Range(0, max * 1.1);
+        }
+        return new Range(Math.max(min, max - 100), max + 10);
+    }
+
+    @PreDestroy
+    public void dispose() {
+        cancelReading();
+        if (current != null) {
+            current.removeSelectionListener(onSelection);
+        }
+    }
+}
