@@ -4,6 +4,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.fail;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
+import java.nio.file.Path;
+
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Display;
@@ -12,9 +15,14 @@ import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.Text;
 import org.eclipse.swtchart.Chart;
+import org.foldbook.model.Channel;
+import org.foldbook.model.demo.GearboxDemo;
+import org.foldbook.ui.notebook.CurrentNotebook;
+import org.foldbook.ui.notebook.NotebookDocument;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The fold explorer part in a real SWT shell (needs a display; the test command provides Xvfb).
@@ -80,16 +88,16 @@ class FoldExplorerPartTest {
     }
 
     @Test
-    void followsTheSelectedChannelsPeaksRateAndChain(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
-            throws java.io.IOException {
-        var document = org.foldbook.ui.notebook.NotebookDocument.load(org.foldbook.model.demo.GearboxDemo.write(dir));
+    void followsTheSelectedChannelsPeaksRateAndChain(@TempDir Path dir)
+            throws IOException {
+        var document = NotebookDocument.load(GearboxDemo.write(dir));
         try {
-            var current = new org.foldbook.ui.notebook.CurrentNotebook();
+            var current = new CurrentNotebook();
             current.open(document);
             FoldExplorerPart part = new FoldExplorerPart();
             part.current = current;
             part.createControls(shell);
-            org.foldbook.model.Channel housing = document.notebook().getExperiments().get(0).getChannels().get(0);
+            Channel housing = document.notebook().getExperiments().get(0).getChannels().get(0);
             assertEquals("housing Z", housing.getName());
             current.select(housing);
             long end = System.nanoTime() + 120_000_000_000L;

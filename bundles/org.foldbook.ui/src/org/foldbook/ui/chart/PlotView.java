@@ -8,6 +8,7 @@ import org.eclipse.swt.SWT;
 import org.eclipse.swt.events.PaintEvent;
 import org.eclipse.swt.graphics.Color;
 import org.eclipse.swt.graphics.GC;
+import org.eclipse.swt.graphics.Rectangle;
 import org.eclipse.swt.graphics.RGB;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swtchart.Chart;
@@ -42,6 +43,7 @@ public final class PlotView {
     private final List<Color> colours = new ArrayList<>();
     private final List<ChartData.Series> shown = new ArrayList<>();
     private final List<Band> bands = new ArrayList<>();
+    private final List<PointLabel> pointLabels = new ArrayList<>();
     private int nextColour;
 
     public PlotView(Composite parent, String title, String xTitle, String yTitle) {
@@ -66,6 +68,7 @@ public final class PlotView {
                 return true;
             }
         });
+        chart.getPlotArea().addCustomPaintListener(this::drawLabels);
         ExportMenu.attach(this);
     }
 
@@ -120,6 +123,7 @@ public final class PlotView {
         }
         shown.clear();
         bands.clear();
+        pointLabels.clear();
         nextColour = 0;
     }
 
@@ -140,14 +144,42 @@ public final class PlotView {
         line(name, x, y, LineStyle.DASH, 1, MARKER_GREY, PlotSymbolType.NONE, ChartData.Style.MARKER);
     }
 
-    /** Adds points without a line (marked peaks), in palette colour {@code index}, each with its label. */
+    /** Adds points without a line (marked peaks), in palette colour {@code index}; a null label: none. */
     public void addPoints(String name, double[] x, double[] y, int index, String[] labels) {
-        ILineSeries<?> s = line(name, x, y, LineStyle.NONE, 1, PALETTE[index % PALETTE.length],
-                PlotSymbolType.CIRCLE, ChartData.Style.POINTS);
+        line(name, x, y, LineStyle.NONE, 1, PALETTE[index % PALETTE.length], PlotSymbolType.CIRCLE,
+                ChartData.Style.POINTS);
         if (labels != null) {
-            s.getLabel().setFormats(labels);
-            s.getLabel().setVisible(true);
+            for (int i = 0; i < x.length && i < labels.length; i++) {
+                if (labels[i] != null) {
+                    pointLabels.add(new PointLabel(x[i], y[i], labels[i]));
+                }
+            }
         }
+    }
+
+    /** Draws the point labels beside their points, after the series. */
+    private void drawLabels(PaintEvent e) {
+        IAxis xAxis = chart.getAxisSet().getXAxis(0);
+        IAxis yAxis = chart.getAxisSet().getYAxis(0);
+        e.gc.setForeground(chart.getDisplay().getSystemColor(SWT.COLOR_BLACK));
+        List<Rectangle> drawn = new ArrayList<>();
+        List<PointLabel> byHeight = new ArrayList<>(pointLabels);
+        byHeight.sort((a, b) -> Double.compare(b.y, a.y)); // the highest points keep their labels
+        for (PointLabel l : byHeight) {
+            if (isLogX() && !(l.x > 0)) {
+                continue;
+            }
+            var size = e.gc.textExtent(l.text);
+            var box = new Rectangle(xAxis.getPixelCoordinate(l.x) + 5,
+                    Math.max(0, yAxis.getPixelCoordinate(l.y) - size.y), size.x, size.y);
+            if (drawn.stream().noneMatch(box::intersects)) { // a label that would overlap another is left out
+                e.gc.drawText(l.text, box.x, box.y, true);
+                drawn.add(box);
+            }
+        }
+    }
+
+    private record PointLabel(double x, double y, String text) {
     }
 
     private ILineSeries<?> line(String name, double[] x, double[] y, LineStyle style, int width, RGB rgb,
@@ -170,6 +202,11 @@ public final class PlotView {
         series.setAntialias(SWT.ON);
         shown.add(data);
         return series;
+    }
+
+    /** Shows or hides the legend (a chart of one line needs none). */
+    public void showLegend(boolean visible) {
+        chart.getLegend().setVisible(visible);
     }
 
     /** A logarithmic or linear x axis; every x shown must then be positive. */

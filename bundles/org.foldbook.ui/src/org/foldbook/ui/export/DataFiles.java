@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 
 import org.apache.commons.csv.CSVFormat;
@@ -48,7 +49,7 @@ public final class DataFiles {
         for (ChartData.Series s : chart.series()) {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("name", s.name());
-            m.put("style", s.style().name().toLowerCase(java.util.Locale.ROOT));
+            m.put("style", s.style().name().toLowerCase(Locale.ROOT));
             m.put("x", s.x());
             m.put("y", s.y());
             series.add(m);

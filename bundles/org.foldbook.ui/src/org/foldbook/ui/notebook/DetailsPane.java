@@ -23,6 +23,7 @@ import org.foldbook.model.derived.ChainFigures;
 import org.foldbook.model.derived.Names;
 import org.foldbook.model.derived.Quantities;
 import org.foldbook.ui.chart.PlotView;
+import org.foldbook.ui.export.ExportMenu;
 
 /**
  * The details of the selected notebook object: for a chain (or a channel or stage of one) its path,
@@ -76,6 +77,7 @@ final class DetailsPane {
         GridLayoutFactory.fillDefaults().numColumns(2).spacing(8, 4).applyTo(middle);
         GridDataFactory.fillDefaults().grab(true, true).applyTo(middle);
         figures = new Table(middle, SWT.BORDER | SWT.FULL_SELECTION | SWT.V_SCROLL);
+        ExportMenu.attach(figures, "Chain figures");
         figures.setHeaderVisible(true);
         figures.setLinesVisible(true);
         for (String column : new String[] { "Figure", "Value" }) {

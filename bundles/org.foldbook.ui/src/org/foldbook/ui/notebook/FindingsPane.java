@@ -19,6 +19,7 @@ import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
+import org.foldbook.ui.export.ExportMenu;
 
 /**
  * The findings of the notebook's validation: a list with a status line, Check again and Stop. The
@@ -57,6 +58,7 @@ final class FindingsPane {
             }
         });
         table = new Table(box, SWT.BORDER | SWT.FULL_SELECTION | SWT.V_SCROLL);
+        ExportMenu.attach(table, "Findings");
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
         for (String column : new String[] { "Severity", "Object", "Finding" }) {

@@ -98,7 +98,12 @@ public class FoldExplorerPart {
         for (String title : new String[] {"Tone (Hz)", "Appears at (Hz)", "Zone", "Seen as", "Chain (dB)"}) {
             TableColumn c = new TableColumn(table, SWT.LEFT);
             c.setText(title);
-            c.setWidth(title.startsWith("Appears") ? 110 : 72);
+            c.setWidth(switch (title) {
+                case "Appears at (Hz)" -> 100;
+                case "Zone" -> 44;
+                case "Seen as" -> 58;
+                default -> 76;
+            });
         }
         GridDataFactory.fillDefaults().span(2, 1).grab(true, true).applyTo(table);
         ExportMenu.attach(table, "Fold explorer");
@@ -215,8 +220,7 @@ public class FoldExplorerPart {
         for (FoldExplorerModel.Row row : model.rows()) {
             TableItem item = new TableItem(table, SWT.NONE);
             item.setText(new String[] {fmt(row.toneHz()), fmt(row.apparentHz()), Long.toString(row.zone()),
-                    row.folded() ? "alias" : "true", model.hasChain() ? String.format(Locale.ROOT, "%.1f",
-                            row.attenuationDb()) : "no chain"});
+                    row.folded() ? "alias" : "true", model.hasChain() ? decibels(row.attenuationDb()) : "no chain"});
         }
         plot.clear();
         for (int i = 0; i < tones.length; i++) {
@@ -251,6 +255,11 @@ public class FoldExplorerPart {
 
     static double parsePositive(String what, String text) {
         return NumberText.positive(what, text);
+    }
+
+    /** One decimal; a rounding residue of a flat response reads 0.0, not -0.0. */
+    static String decibels(double db) {
+        return Double.isInfinite(db) ? "∞" : String.format(Locale.ROOT, "%.1f", Math.abs(db) < 0.05 ? 0.0 : db);
     }
 
     private static String fmt(double v) {

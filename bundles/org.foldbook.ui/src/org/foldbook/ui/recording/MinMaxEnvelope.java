@@ -1,5 +1,7 @@
 package org.foldbook.ui.recording;
 
+import java.util.Arrays;
+
 /**
  * The time overview of a recording of any length: the samples are reduced, as they stream past, to a
  * fixed number of columns holding each column's minimum and maximum, so memory does not grow with the
@@ -22,8 +24,8 @@ public final class MinMaxEnvelope {
         int used = (int) ((frames + perColumn - 1) / perColumn);
         this.min = new double[used];
         this.max = new double[used];
-        java.util.Arrays.fill(min, Double.POSITIVE_INFINITY);
-        java.util.Arrays.fill(max, Double.NEGATIVE_INFINITY);
+        Arrays.fill(min, Double.POSITIVE_INFINITY);
+        Arrays.fill(max, Double.NEGATIVE_INFINITY);
     }
 
     public void add(double[] x, int count) {

@@ -9,6 +9,7 @@ import org.eclipse.jface.layout.GridDataFactory;
 import org.eclipse.jface.layout.GridLayoutFactory;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
@@ -55,53 +56,58 @@ public class RecordingPart {
     Label cursor;
     private Composite charts;
     private ReadRecordingJob job;
+    /** Peaks labelled on the chart (the strongest); the table lists them all. */
+    static final int LABELLED_PEAKS = 6;
 
     @PostConstruct
     public void createControls(Composite parent) {
-        GridLayoutFactory.fillDefaults().margins(8, 8).spacing(6, 6).applyTo(parent);
-        header = new Label(parent, SWT.WRAP);
-        GridDataFactory.fillDefaults().grab(true, false).hint(600, SWT.DEFAULT).applyTo(header);
-
+        GridLayoutFactory.fillDefaults().margins(8, 6).spacing(6, 4).applyTo(parent);
         Composite bar = new Composite(parent, SWT.NONE);
-        GridLayoutFactory.fillDefaults().numColumns(6).spacing(8, 0).applyTo(bar);
+        GridLayoutFactory.fillDefaults().numColumns(7).spacing(8, 0).applyTo(bar);
         GridDataFactory.fillDefaults().grab(true, false).applyTo(bar);
         new Label(bar, SWT.NONE).setText("Levels:");
         levels = new Combo(bar, SWT.READ_ONLY);
-        GridDataFactory.fillDefaults().hint(240, SWT.DEFAULT).applyTo(levels);
+        GridDataFactory.fillDefaults().hint(230, SWT.DEFAULT).applyTo(levels);
         logAxis = new Button(bar, SWT.CHECK);
         logAxis.setText("Log frequency axis");
         reread = new Button(bar, SWT.PUSH);
         reread.setText("Read again");
         progress = new ProgressBar(bar, SWT.HORIZONTAL);
         progress.setMaximum(1000);
-        GridDataFactory.fillDefaults().grab(true, false).applyTo(progress);
+        GridDataFactory.fillDefaults().align(SWT.FILL, SWT.CENTER).hint(140, SWT.DEFAULT).applyTo(progress);
         cancel = new Button(bar, SWT.PUSH);
         cancel.setText("Cancel reading");
         cancel.setEnabled(false);
+        cursor = new Label(bar, SWT.NONE);
+        GridDataFactory.fillDefaults().grab(true, false).align(SWT.FILL, SWT.CENTER).applyTo(cursor);
 
+        header = new Label(parent, SWT.NONE);
+        GridDataFactory.fillDefaults().grab(true, false).applyTo(header);
         message = new Label(parent, SWT.WRAP);
         GridDataFactory.fillDefaults().grab(true, false).hint(600, SWT.DEFAULT).applyTo(message);
 
-        charts = new SashForm(parent, SWT.VERTICAL);
-        GridDataFactory.fillDefaults().grab(true, true).applyTo(charts);
-        envelope = new PlotView(charts, "Whole recording (min/max per column)", "Time (s)", "Value");
-        Composite lower = new Composite(charts, SWT.NONE);
-        GridLayoutFactory.fillDefaults().numColumns(2).spacing(6, 2).applyTo(lower);
-        spectrum = new PlotView(lower, "Spectrum (Welch, rms per line)", "Frequency (Hz)", "Level");
-        GridDataFactory.fillDefaults().grab(true, true).applyTo(spectrum.control());
-        peaks = new Table(lower, SWT.BORDER | SWT.FULL_SELECTION);
+        // side by side: the part is wide and not tall
+        SashForm row = new SashForm(parent, SWT.HORIZONTAL);
+        charts = row;
+        GridDataFactory.fillDefaults().grab(true, true).applyTo(row);
+        envelope = new PlotView(row, "Whole recording (min/max per column)", "Time (s)", "Value");
+        spectrum = new PlotView(row, "Spectrum (Welch, rms per line)", "Frequency (Hz)", "Level");
+        peaks = new Table(row, SWT.BORDER | SWT.FULL_SELECTION);
         peaks.setHeaderVisible(true);
         peaks.setLinesVisible(true);
         for (String title : new String[] {"Peak (Hz)", "Level", "dBFS"}) {
             TableColumn c = new TableColumn(peaks, SWT.RIGHT);
             c.setText(title);
-            c.setWidth(title.equals("dBFS") ? 60 : 90);
+            c.setWidth(switch (title) {
+                case "Peak (Hz)" -> 76;
+                case "Level" -> 116;
+                default -> 56;
+            });
         }
-        GridDataFactory.fillDefaults().grab(false, true).hint(250, SWT.DEFAULT).applyTo(peaks);
         ExportMenu.attach(peaks, "Spectral peaks");
-        cursor = new Label(lower, SWT.NONE);
-        GridDataFactory.fillDefaults().span(2, 1).grab(true, false).applyTo(cursor);
-        ((SashForm) charts).setWeights(35, 65);
+        envelope.showLegend(false);
+        spectrum.showLegend(false);
+        row.setWeights(30, 50, 20);
 
         levels.addListener(SWT.Selection, e -> {
             List<RecordingPresenter.Levels> choices = presenter.choices();
@@ -200,8 +206,11 @@ public class RecordingPart {
     private void render() {
         RecordingOverview o = presenter.overview();
         message.setText(presenter.message() == null ? "" : presenter.message());
-        header.setText(o == null ? (presenter.channel() == null ? "Recording" : "Channel '"
+        ((GridData) message.getLayoutData()).exclude = presenter.message() == null;
+        message.setVisible(presenter.message() != null);
+        header.setText(o == null ? (presenter.channel() == null ? "No channel selected" : "Channel '"
                 + presenter.channel().getName() + "'") : presenter.header());
+        header.setToolTipText(o == null ? null : presenter.details());
         levels.removeAll();
         for (RecordingPresenter.Levels l : presenter.choices()) {
             levels.add(presenter.label(l));
@@ -222,7 +231,7 @@ public class RecordingPart {
             spectrum.addLine("spectrum", line[0], line[1], 0, 1);
             double[][] marked = presenter.peakPoints();
             List<String[]> rows = presenter.peakRows();
-            String[] labels = rows.stream().map(r -> r[0] + " Hz").toArray(String[]::new);
+            String[] labels = presenter.peakLabels(LABELLED_PEAKS);
             spectrum.addPoints("peaks", marked[0], marked[1], 1, labels);
             for (String[] r : rows) {
                 new TableItem(peaks, SWT.NONE).setText(r);
@@ -234,6 +243,7 @@ public class RecordingPart {
         }
         envelope.control().redraw();
         spectrum.control().redraw();
+        peaks.redraw();
         header.getParent().layout(true, true);
     }
 

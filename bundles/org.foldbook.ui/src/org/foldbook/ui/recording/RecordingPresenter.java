@@ -186,14 +186,38 @@ public final class RecordingPresenter {
         return s.present() ? PhysicalScale.pretty(s.unit()) : "full scale";
     }
 
-    /** One line about the file: name, rate, length, checksum state, how levels were scaled. */
+    /** One line about the file: channel, file, rate, length, checksum state, full scale in units. */
     public String header() {
         RecordingOverview o = overview;
         String sha = o.checksumChanged() ? "SHA-256 CHANGED since logged" : "SHA-256 as logged";
-        return String.format(Locale.ROOT, "%s — %s, %.6g S/s, %d samples (%.3g s), %s. Welch: %d segments of %d"
-                + " (%.3g Hz lines), Hann. Scale: %s", o.channelName(), o.file().getFileName(), o.rateHz(),
-                o.frames(), o.durationSeconds(), sha, o.spectrum().segments(), o.spectrum().transformLength(),
-                o.spectrum().binWidth(), o.scale().how());
+        String fs = o.scale().present() ? String.format(Locale.ROOT, "full scale = %s %s",
+                PhysicalScale.fmt(o.scale().unitsPerFullScale()), PhysicalScale.pretty(o.scale().unit()))
+                : "levels in full scale (" + o.scale().how() + ")";
+        return String.format(Locale.ROOT, "%s  ·  %s  ·  %.6g S/s  ·  %d samples (%.3g s)  ·  %s  ·  %s",
+                o.channelName(), o.file().getFileName(), o.rateHz(), o.frames(), o.durationSeconds(), sha, fs);
+    }
+
+    /** The header's details: the file's path, SHA-256, the Welch settings and the scale's arithmetic. */
+    public String details() {
+        RecordingOverview o = overview;
+        return String.format(Locale.ROOT, "%s%nSHA-256 %s%nWelch: %d segments of %d samples (%.4g Hz lines), periodic"
+                + " Hann, half overlap%nScale: %s", o.file(), o.sha256(), o.spectrum().segments(),
+                o.spectrum().transformLength(), o.spectrum().binWidth(), o.scale().how());
+    }
+
+    /** Labels for {@link #peakPoints()}: "906.5 Hz" for the {@code count} strongest, null for the rest. */
+    public String[] peakLabels(int count) {
+        List<SpectralPeak> peaks = overview.peaks();
+        List<SpectralPeak> strongest = new ArrayList<>(peaks);
+        strongest.sort((a, b) -> Double.compare(b.levelDb(), a.levelDb()));
+        strongest = strongest.subList(0, Math.min(count, strongest.size()));
+        String[] labels = new String[peaks.size()];
+        for (int i = 0; i < labels.length; i++) {
+            if (strongest.contains(peaks.get(i))) {
+                labels[i] = String.format(Locale.ROOT, "%.1f Hz", peaks.get(i).frequencyHz());
+            }
+        }
+        return labels;
     }
 
     private String value(double v) {

@@ -20,8 +20,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Starts the real Foldbook product (Equinox launcher, E4 application, our application model) with its
- * self-check switched on, and checks the report it leaves: the main window was shown, the notebook
- * and fold explorer parts were rendered, the demo notebook was written into the fresh workspace, and
+ * self-check switched on, and checks the report it leaves: the main window was shown, the notebook,
+ * recording and fold explorer parts were rendered (each photographed on its own), the demo notebook was written into the fresh workspace, and
  * the screenshot holds a real picture. The screenshot stays in
  * target/smoke/workbench.png for a person to look at.
  */
@@ -76,6 +76,14 @@ class WorkbenchSmokeTest {
         assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.notebook"), report.toString());
         assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.walkthrough"), report.toString());
         assertTrue(Files.isRegularFile(out.resolve("part-org.foldbook.ui.part.walkthrough.png")), report.toString());
+        assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.recording"), report.toString());
+        // each part photographed on its own once shown (the recording view and the fold explorer share a stack)
+        for (String part : new String[] {"recording", "foldExplorer"}) {
+            String name = report.getProperty("part.org.foldbook.ui.part." + part + ".screenshot");
+            assertEquals("part-org.foldbook.ui.part." + part + ".png", name, report.toString());
+            BufferedImage partShot = ImageIO.read(out.resolve(name).toFile());
+            assertTrue(distinctColours(partShot) > 20, name + " is (nearly) a single colour: nothing was drawn");
+        }
         // first start: the demo notebook was written into the workspace (-data) and opened from there
         Path demo = out.resolve("workspace/demo/gearbox-stand.foldbook");
         assertTrue(Files.isRegularFile(demo), "no demo notebook at " + demo + "; console:\n" + console);
