@@ -16,7 +16,7 @@ import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.Text;
 import org.eclipse.swtchart.Chart;
 import org.foldbook.model.Channel;
-import org.foldbook.model.demo.GearboxDemo;
+import org.foldbook.demo.GearboxDemo;
 import org.foldbook.ui.notebook.CurrentNotebook;
 import org.foldbook.ui.notebook.NotebookDocument;
 import org.junit.jupiter.api.AfterEach;

@@ -29,7 +29,7 @@ import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swtchart.ISeries;
 import org.foldbook.model.Channel;
 import org.foldbook.model.Recording;
-import org.foldbook.model.demo.GearboxDemo;
+import org.foldbook.demo.GearboxDemo;
 import org.foldbook.io.Sha256;
 import org.foldbook.ui.notebook.CurrentNotebook;
 import org.foldbook.ui.notebook.NotebookDocument;

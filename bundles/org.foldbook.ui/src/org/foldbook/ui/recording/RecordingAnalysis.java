@@ -6,7 +6,7 @@ import java.util.List;
 
 import org.foldbook.channel.ChannelDataException;
 import org.foldbook.channel.ChannelReader;
-import org.foldbook.channel.ChannelStream;
+import org.foldbook.channel.ChannelScan;
 import org.foldbook.channel.ReadProgress;
 import org.foldbook.dsp.peaks.PeakFinder;
 import org.foldbook.dsp.peaks.SpectralPeak;
@@ -18,7 +18,7 @@ import org.foldbook.io.RecordingInfo;
 import org.foldbook.model.Channel;
 
 /**
- * One streamed pass over a channel's recording (through {@link ChannelStream}, so memory stays bounded
+ * One streamed pass over a channel's recording (through {@link ChannelScan}, so memory stays bounded
  * for files larger than memory): the min/max envelope in {@value #COLUMNS} columns and a Welch power
  * spectrum (periodic Hann, half overlap, mean removed per segment), then its peaks. Free of SWT; the
  * workbench runs it in {@link ReadRecordingJob}.
@@ -47,7 +47,7 @@ public final class RecordingAnalysis {
             throws ChannelDataException {
         PhysicalScale scale = PhysicalScale.of(channel);
         Reducers reducers = new Reducers();
-        ChannelStream.Scan scan = ChannelStream.scan(channel, request, reducers, progress);
+        ChannelScan.Scan scan = ChannelScan.scan(channel, request, reducers, progress);
         if (reducers.welch.segments() == 0) {
             throw new ChannelDataException(scan.file(), "holds " + scan.frames()
                     + " samples, fewer than one spectrum segment of " + segmentLength(scan.frames()));
@@ -64,7 +64,7 @@ public final class RecordingAnalysis {
     }
 
     /** The envelope and Welch accumulator, created when the file's length and rate are known. */
-    private static final class Reducers implements ChannelStream.Sink {
+    private static final class Reducers implements ChannelScan.Sink {
         MinMaxEnvelope envelope;
         WelchAccumulator welch;
         PeakFinder finder;
