@@ -21,7 +21,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "foldbook", mixinStandardHelpOptions = true, version = "foldbook 0.1",
         description = "Headless commands of Foldbook (no display needed).",
-        subcommands = {SweepCommand.class, FoldCommand.class, DemoCommand.class, HelpCommand.class},
+        subcommands = {SweepCommand.class, AuditCommand.class, FoldCommand.class, DemoCommand.class, HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:done (for a command with a threshold: nothing at or above it)",
             "1:findings at or above the command's threshold (a report, not a failure)",
