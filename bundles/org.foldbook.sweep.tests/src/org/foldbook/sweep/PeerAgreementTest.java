@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
  * Per-rate peak lists against the peer implementation (numpy 1.24 / scipy 1.10, Debian python3-scipy),
  * written by releng/reference/sweep_vectors.py: the peer's synthetic recording (clearly synthetic: five
  * tones + seeded noise, 16384 samples at 100 kS/s), its 16-rate grid, and its --details peak lists.
- * Expected: the same bins, levels within 0.01 dB (peer README: "same answers first").
+ * Expected: the same bins, levels within 0.01 dB (docs/REFERENCES.md: our reference pipeline; same answers first).
  */
 class PeerAgreementTest {
     static final double FS0 = 100_000;

@@ -22,7 +22,7 @@ class RateLadderTest {
             assertEquals(peer.get(i).up(), mine.get(i).up(), "up at " + i);
             assertEquals(peer.get(i).down(), mine.get(i).down(), "down at " + i);
         }
-        // peer README: 100 rates, 2 of them integer ratios (1/1 and 1/50), up <= 765, down <= 1000
+        // docs/REFERENCES.md (reference pipeline): 100 rates, 2 of them integer ratios (1/1 and 1/50), up <= 765, down <= 1000
         assertEquals(2, mine.steps().stream().filter(RateStep::isIntegerDecimation).count());
         assertTrue(mine.steps().stream().allMatch(s -> s.up() <= 765 && s.down() <= 1000));
     }

@@ -87,7 +87,7 @@ class BareSamplerTest {
         return 10 * Math.log10(e2 / cnt / 0.5);
     }
 
-    @ParameterizedTest(name = "tone at {0}·fs0: error vs exact sin() <= -100 dB (issue 6 spec; peer README measured <= -108 dB)")
+    @ParameterizedTest(name = "tone at {0}·fs0: error vs exact sin() <= -100 dB (issue 6 spec; docs/REFERENCES.md: our reference pipeline measured about -108 dB)")
     @ValueSource(doubles = {0.01, 0.1337, 0.25, 0.33, 0.37, 0.39})
     void inBandToneAccuracy(double fRel) {
         for (RateRatio q : new RateRatio[] {RateRatio.of(556, 571), RateRatio.of(521, 542), RateRatio.of(13, 50)}) {
@@ -97,7 +97,7 @@ class BareSamplerTest {
     }
 
     @Test
-    @DisplayName("near the source Nyquist the kernel attenuates: error at 0.45·fs0 about -23 dB (peer README), far above -100")
+    @DisplayName("near the source Nyquist the kernel attenuates: error at 0.45·fs0 about -20 dB (docs/REFERENCES.md, our reference pipeline), far above -100")
     void documentedLimitNearNyquist() {
         double db = toneErrorDb(BareSampler.of(RateRatio.of(556, 571)), 0.45, 20000, 40);
         assertTrue(db > -40 && db < -10, db + " dB");

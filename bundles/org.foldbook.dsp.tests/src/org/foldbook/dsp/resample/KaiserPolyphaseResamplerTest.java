@@ -30,7 +30,7 @@ class KaiserPolyphaseResamplerTest {
 
     @Test
     void costIsAboutTwentyTapsPerInputSample() {
-        // scipy's design: 20·max(up,down)+1 prototype taps, so ≈ 20·down/up taps per output (peer README)
+        // scipy's design: 20·max(up,down)+1 prototype taps, so ≈ 20·down/up taps per output (docs/REFERENCES.md, scipy resample_poly default design)
         assertEquals(1001, KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(1, 50)).tapsPerOutput());
         // 765/1000 uses 27-28 taps per phase, stored padded to the 32-tap loop
         assertEquals(32, KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(765, 1000)).tapsPerOutput());

@@ -47,7 +47,7 @@ class RateRatioTest {
             assertEquals(Double.parseDouble(r[3]), q.effectiveRate(100000.0), 5e-9, "index " + r[0]);
             integer += q.isIntegerDecimation() ? 1 : 0;
         }
-        assertEquals(2, integer, "peer README: 2 integer ratios (1/1 and 1/50) in the default grid");
+        assertEquals(2, integer, "docs/REFERENCES.md (reference pipeline): 2 integer ratios (1/1 and 1/50) in the default grid");
     }
 
     @Test
