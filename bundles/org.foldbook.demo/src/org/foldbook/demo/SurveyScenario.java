@@ -32,7 +32,8 @@ import org.foldbook.demo.SyntheticTones.Tone;
  *     LP-A takes about 62.3 dB off it (10·log10(1 + 6⁸)), below the everyday chain's floor;</li>
  * <li>a component at 25.6 kHz + 2·906.5 Hz = 27.413 kHz lands on the second mesh harmonic (1813 Hz)
  *     at 25.6 kS/s: it merges with a much stronger peak;</li>
- * <li>the mounted resonance ringing at 32 kHz folds to 6.4 kHz at 25.6 kS/s.</li>
+ * <li>the mounted resonance ringing at 32 kHz folds to 6.4 kHz at 25.6 kS/s, and the 17th mesh harmonic
+ *     (15.41 kHz) to 10.19 kHz: the survey is the evidence that the housing channel's peaks there are folded.</li>
  * </ul>
  */
 final class SurveyScenario {
@@ -126,6 +127,7 @@ final class SurveyScenario {
             new Tone(mesh, 0.30, 0.0),
             new Tone(2 * mesh, 0.12, 0.7),
             new Tone(3 * mesh, 0.05, 1.9),
+            new Tone(17 * mesh, 0.02, 0.4), // the same 17th mesh harmonic the housing channel records folded
             new Tone(BEARING_HZ, 0.05, 0.8),
             new Tone(MERGING_HZ, 0.03, 1.3),
             new Tone(GearboxDemo.RESONANCE_HZ, Math.pow(10, GearboxDemo.RINGING_DBFS / 20), 2.6),
