@@ -6,7 +6,7 @@
 # Heap: FOLDBOOK_HEAP (e.g. 6g) sets -Xmx; by default it is sized from an --input file (the channel in
 # memory, plus one filtered copy in the modelled mode); with --stream 256 MB.
 # Quick start: an ahead-of-time cache of the classes the command loads and links and of the method
-# profiles of its run (JDK 25: -XX:AOTCacheOutput writes it at the end of the first run, -XX:AOTCache uses
+# profiles of a training run (JDK 25: -XX:AOTCacheOutput writes it after the first run, in the background, -XX:AOTCache uses
 # it; older JDKs: a dynamic class-data-sharing archive), kept per JDK and product under ~/.cache/foldbook
 # and rebuilt when a plug-in jar is newer. FOLDBOOK_AOT=0 turns it off.
 set -euo pipefail
@@ -60,14 +60,15 @@ if [ "${FOLDBOOK_AOT:-1}" != 0 ] && mkdir -p "$cache_dir" 2>/dev/null && [ -w "$
         if [ -f "$cache" ]; then
             exec "$FOLDBOOK_JAVA" -XX:AOTCache="$cache" "${java_args[@]}" org.foldbook.cli.Main "$@"
         fi
-        # first run: trains and writes its own file (two first runs at once do not collide), then moves
-        # it into place; the JVM's notes about it go to standard error
+        # first run: the command runs as usual; the cache is trained afterwards, quietly and in the
+        # background, on the command's own help (the JVM's notes about it go nowhere), so no user ever
+        # sees them; two first runs at once write separate files
         tmp="$cache.$$.tmp"
         status=0
-        "$FOLDBOOK_JAVA" -XX:AOTCacheOutput="$tmp" -XX:+DisplayVMOutputToStderr -Xlog:aot=off -Xlog:cds=off "${java_args[@]}" \
-            org.foldbook.cli.Main "$@" || status=$?
-        [ "$status" = 0 ] && [ -s "$tmp" ] && mv -f "$tmp" "$cache"
-        rm -f "$tmp" "$tmp.config"
+        "$FOLDBOOK_JAVA" "${java_args[@]}" org.foldbook.cli.Main "$@" || status=$?
+        ( "$FOLDBOOK_JAVA" -XX:AOTCacheOutput="$tmp" -Xlog:aot=off -Xlog:cds=off "${java_args[@]}" \
+            org.foldbook.cli.Main "${1:-help}" --help >/dev/null 2>&1 && [ -s "$tmp" ] && mv -f "$tmp" "$cache"
+          rm -f "$tmp" "$tmp.config" ) </dev/null >/dev/null 2>&1 &
         exit "$status"
     fi
     exec "$FOLDBOOK_JAVA" -XX:SharedArchiveFile="$cache_dir/cli-$key.jsa" -XX:+AutoCreateSharedArchive \
