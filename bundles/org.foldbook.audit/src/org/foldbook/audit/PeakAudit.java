@@ -49,7 +49,9 @@ final class PeakAudit {
         for (SpectralPeak p : found) {
             double f = Math.min(Math.max(p.frequencyHz(), 0), rate / 2);
             double level = sp.sineLevelDb(Math.pow(10, p.levelDb() / 10));
-            out.add(one(f, level, rate, protection, upperHz, ceilingDbfs, ref, prominenceDb, policy));
+            // a peak is known to a bin: a source at the front end's edge can fold to up to a bin beyond
+            // the edge's own image, so candidates reach one bin past the stated edge
+            out.add(one(f, level, rate, protection, upperHz + sp.binHz(), ceilingDbfs, ref, prominenceDb, policy));
         }
         return out;
     }
