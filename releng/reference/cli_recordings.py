@@ -1,5 +1,6 @@
 #!/usr/bin/python3
-"""Writes the CSV and HDF5 recordings the org.foldbook.cli tests sweep (`foldbook sweep --input`).
+"""Writes the CSV and HDF5 recordings the org.foldbook.cli tests sweep (`foldbook sweep --input`) and the
+org.foldbook.channel tests read as notebook channels (the workbench's path); the same files go to both.
 
 Written by tools outside Foldbook: the CSV by Python's csv module (a time column in seconds, then two
 value columns, numbers in Python's shortest round-trip repr), the HDF5 file by Debian's python3-h5py (one
@@ -46,4 +47,10 @@ with open(os.path.join(OUT, "expected.properties"), "w", encoding="utf-8") as fh
     fh.write("rate=%r\n" % fs)
     fh.write("frames=%d\n" % n)
     fh.write("largestPeakHz=%r\n" % peak_hz)
-print("written to", OUT)
+# the channel tests read the same two recordings through a notebook (copies, byte for byte)
+import shutil
+CHANNEL_OUT = "bundles/org.foldbook.channel.tests/resources/org/foldbook/channel/recordings"
+os.makedirs(CHANNEL_OUT, exist_ok=True)
+for name in ("two-tones.csv", "two-tones.h5"):
+    shutil.copyfile(os.path.join(OUT, name), os.path.join(CHANNEL_OUT, name))
+print("written to", OUT, "and", CHANNEL_OUT)
