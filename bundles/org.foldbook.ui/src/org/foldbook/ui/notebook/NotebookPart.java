@@ -55,6 +55,13 @@ public class NotebookPart {
 
     private NotebookDocument document;
     private final CommandStackListener onChange = event -> changed(); // commands run on the UI thread
+    /** Another part (the audit, a finding) selects a notebook object: the tree reveals it. */
+    private final Consumer<Object> onOtherPartsSelection = selected -> {
+        if (selected instanceof org.eclipse.emf.ecore.EObject && !tree.getControl().isDisposed()
+                && tree.getStructuredSelection().getFirstElement() != selected) {
+            tree.setSelection(new StructuredSelection(selected), true);
+        }
+    };
     private final Consumer<CurrentNotebook> onOpen = c -> {
         if (fileLabel.isDisposed()) {
             return;
@@ -88,6 +95,7 @@ public class NotebookPart {
 
         if (current != null) {
             current.addListener(onOpen);
+            current.addSelectionListener(onOtherPartsSelection);
             if (current.document() != null) {
                 show(current.document());
             } else if (current.problem() != null) {
@@ -234,6 +242,7 @@ public class NotebookPart {
         findings.cancel();
         if (current != null) {
             current.removeListener(onOpen);
+            current.removeSelectionListener(onOtherPartsSelection);
         }
         if (document != null) {
             document.removeCommandStackListener(onChange);
