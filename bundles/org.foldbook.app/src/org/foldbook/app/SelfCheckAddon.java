@@ -59,13 +59,14 @@ public class SelfCheckAddon {
         // The workbench service exists only once start-up is complete, so it is looked up here.
         IWorkbench workbench = application.getContext().get(IWorkbench.class);
         Display display = Display.getCurrent();
-        display.timerExec(SETTLE_MILLIS, () -> {
-            try {
-                runCheck(display, Path.of(folder));
-            } finally {
-                workbench.close();
-            }
-        });
+        display.timerExec(SETTLE_MILLIS, () -> SelfCheckSimulation.drive(display, application.getContext(),
+                mainShell(), () -> {
+                    try {
+                        runCheck(display, Path.of(folder));
+                    } finally {
+                        workbench.close();
+                    }
+                }));
     }
 
     private void runCheck(Display display, Path folder) {
@@ -85,6 +86,10 @@ public class SelfCheckAddon {
                 report.add("display.size=" + screen.width + "x" + screen.height);
                 report.add("window.location=" + b.x + "," + b.y);
             }
+        }
+        if (mainShell != null) {
+            report.add("simulation.status=" + SelfCheckSimulation.text(mainShell, "status"));
+            report.add("simulation.whatIf=" + SelfCheckSimulation.text(mainShell, "whatIfState"));
         }
         try {
             Files.createDirectories(folder);
@@ -112,6 +117,15 @@ public class SelfCheckAddon {
         } catch (IOException e) {
             throw new UncheckedIOException("self-check could not write to " + folder, e);
         }
+    }
+
+    private Shell mainShell() {
+        for (MTrimmedWindow window : modelService.findElements(application, null, MTrimmedWindow.class)) {
+            if (window.getWidget() instanceof Shell shell && shell.isVisible()) {
+                return shell;
+            }
+        }
+        return null;
     }
 
     private EPartService mainWindowParts() {

@@ -72,7 +72,12 @@ class WorkbenchSmokeTest {
         }
         assertEquals("visible", report.getProperty("window.org.foldbook.app.window.main"), report.toString());
         assertEquals("Foldbook", report.getProperty("window.title"), report.toString());
-        assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.foldExplorer"), report.toString());
+        assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.simulation"), report.toString());
+        // the fold explorer is the tab behind the rate sweep: in the window, rendered when chosen
+        assertTrue(report.containsKey("part.org.foldbook.ui.part.foldExplorer"), report.toString());
+        // the self-check records the rate sweep's state: nothing selected at start, so no run and no what-if
+        assertEquals("", report.getProperty("simulation.status"), report.toString());
+        assertEquals("after a run", report.getProperty("simulation.whatIf"), report.toString());
         assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.notebook"), report.toString());
         assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.walkthrough"), report.toString());
         assertTrue(Files.isRegularFile(out.resolve("part-org.foldbook.ui.part.walkthrough.png")), report.toString());
