@@ -3,7 +3,6 @@ package org.foldbook.channel;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 
 import org.foldbook.dsp.resample.SimulationWarning;
@@ -14,6 +13,7 @@ import org.foldbook.sweep.RateStep;
 import org.foldbook.sweep.SimulatorAccuracy;
 import org.foldbook.sweep.SourceFate;
 import org.foldbook.sweep.SourcePeak;
+import org.foldbook.sweep.SummarisedPeaks;
 import org.foldbook.sweep.SweepResult;
 import org.foldbook.sweep.Verdict;
 
@@ -69,13 +69,16 @@ public final class SweepResultJson {
             for (JsonNode p : r.path("peaks")) {
                 JsonNode id = p.path("sourcePeak");
                 observed.add(new ObservedPeak(num(p.path("frequency")), num(p.path("levelDb")),
-                        verdict(p.path("verdict").asText()), id.isNull() ? -1 : id.asInt(), num(p.path("gainDb"))));
+                        verdict(p.path("verdict").asText()), id.isNull() ? -1 : id.asInt(), num(p.path("gainDb")),
+                        p.path("reason").asText()));
             }
             List<SourceFate> fates = new ArrayList<>();
             for (JsonNode f : r.path("sources")) {
                 fates.add(new SourceFate(f.path("sourcePeak").asInt(), verdict(f.path("verdict").asText()),
                         num(f.path("apparentFrequency")), num(f.path("observedFrequency")), num(f.path("gainDb")),
-                        f.has("mergedInto") ? f.path("mergedInto").asInt() : -1));
+                        num(f.path("predictedGainDb")), num(f.path("floorDb")),
+                        f.has("otherPeak") ? f.path("otherPeak").asInt() : -1, num(f.path("otherFrequency")),
+                        f.path("neededSegment").asInt(0), f.path("reason").asText()));
             }
             rates.add(new RateResult(step, r.path("samples").asLong(), num(r.path("binWidth")), observed, fates));
         }
@@ -85,8 +88,11 @@ public final class SweepResultJson {
             band = Optional.of(new BandSummary(num(b.path("low")), num(b.path("high")),
                     num(b.path("lowestAliasFreeRate"))));
         }
+        JsonNode sum = src.path("summarised");
+        SummarisedPeaks summarised = new SummarisedPeaks(sum.path("count").asInt(0), num(sum.path("belowDb")),
+                num(sum.path("highestDb")));
         return new SweepResult(root.path("mode").asText(), rate, src.path("samples").asLong(), binWidth, sources, rates,
-                band, accuracy, warnings);
+                band, accuracy, warnings, summarised, src.path("peakRule").asText());
     }
 
     private static JsonNode need(JsonNode parent, String name) throws IOException {
@@ -106,10 +112,11 @@ public final class SweepResultJson {
     }
 
     private static Verdict verdict(String key) throws IOException {
-        try {
-            return Verdict.valueOf(key.toUpperCase(Locale.ROOT));
-        } catch (IllegalArgumentException e) {
-            throw new IOException("unknown verdict '" + key + "'", e);
+        for (Verdict v : Verdict.values()) {
+            if (v.key().equals(key)) {
+                return v;
+            }
         }
+        throw new IOException("unknown verdict '" + key + "'");
     }
 }

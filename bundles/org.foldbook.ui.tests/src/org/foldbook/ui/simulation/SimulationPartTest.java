@@ -34,7 +34,7 @@ import org.foldbook.channel.ReadProgress;
 import org.foldbook.model.Channel;
 import org.foldbook.model.Experiment;
 import org.foldbook.model.SweepMode;
-import org.foldbook.model.demo.GearboxDemo;
+import org.foldbook.demo.GearboxDemo;
 import org.foldbook.model.derived.Quantities;
 import org.foldbook.sweep.SweepEngine;
 import org.foldbook.sweep.SweepProgress;
@@ -109,9 +109,12 @@ class SimulationPartTest {
                 String where = "row " + row + " " + String.join(" | ", cells);
                 assertEquals(Quantities.rate(r.path("rate").asDouble()), cells[1], where);
                 assertEquals(fate.path("verdict").asText(), cells[2], where);
-                JsonNode landsAt = fate.path("observedFrequency").isNumber() && !"suppressed".equals(cells[2])
-                        ? fate.path("observedFrequency") : fate.path("apparentFrequency");
+                JsonNode landsAt = fate.path("observedFrequency").isNumber() ? fate.path("observedFrequency")
+                        : fate.path("apparentFrequency");
                 assertEquals(Quantities.hz(landsAt.asDouble()), cells[3], where);
+                JsonNode gain = fate.path("gainDb").isNumber() ? fate.path("gainDb") : fate.path("predictedGainDb");
+                assertEquals(gain.isNumber() ? Quantities.signedDb(gain.asDouble()) : "", cells[4], where);
+                assertEquals(fate.path("reason").asText(), cells[5], where);
                 assertFalse(cells[5].isBlank(), where);
                 row++;
             }

@@ -22,6 +22,7 @@ import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swt.widgets.Text;
 import org.foldbook.channel.ChannelDataException;
 import org.foldbook.channel.SimulationArchive;
+import org.foldbook.channel.WhatIfRate;
 import org.foldbook.model.Channel;
 import org.foldbook.model.NotebookPackage;
 import org.foldbook.model.SimulationRun;
@@ -302,6 +303,13 @@ public class SimulationPart {
         VerdictRows.peakSummaries(next).forEach(s -> b.append("  ").append(s).append('\n'));
         String band = VerdictRows.bandSummary(next);
         b.append(band == null ? "No band of interest in the plan." : band).append('\n');
+        if (next.summarised() != null && next.summarised().count() > 0) {
+            b.append(next.summarised().count()).append(" weaker source peak(s), more than ")
+                    .append(Quantities.db(next.summarised().belowDb())).append(" below the strongest, not listed.\n");
+        }
+        if (next.peakRule() != null && !next.peakRule().isBlank()) {
+            b.append("Peaks: ").append(next.peakRule()).append(".\n");
+        }
         b.append(next.accuracy().statement()).append('\n');
         next.warnings().forEach(w -> b.append("Caution: ").append(w.text()).append('\n'));
         summary.setText(b.toString());

@@ -15,12 +15,15 @@ import org.foldbook.sweep.Verdict;
 /**
  * The verdict table and the summaries of a sweep result in words, without SWT: one row per source peak
  * and rate (peaks in frequency order, rates from the ladder's first), what happened, where it lands, the
- * gain it got and why, then per peak the lowest rate it is still true at and the band's lowest alias-free
+ * gain it got and why (the reason the sweep gives), then per peak the lowest rate it is still true at and the band's lowest alias-free
  * rate. The table shows exactly the verdicts the result carries.
  */
 public final class VerdictRows {
 
-    /** One cell group of the table; {@code rateIndex} is the rate's index in the result's ladder. */
+    /**
+     * One row of the table; {@code rateIndex} is the rate's index in the result's ladder; {@code gainDb} the
+     * gain measured where it is seen, else the mode's predicted gain.
+     */
     public record Row(int sourcePeak, int rateIndex, double sourceHz, double rateHz, Verdict verdict, double landsAtHz,
             double gainDb, String reason) {
 
@@ -42,30 +45,13 @@ public final class VerdictRows {
         for (SourcePeak s : result.sources()) {
             for (RateResult r : result.rates()) {
                 SourceFate f = r.fate(s.id());
-                double lands = f.verdict() == Verdict.SUPPRESSED ? f.apparentFrequency()
-                        : Double.isNaN(f.observedFrequency()) ? f.apparentFrequency() : f.observedFrequency();
+                // where it is seen, else where the fold arithmetic puts it
+                double lands = Double.isNaN(f.observedFrequency()) ? f.apparentFrequency() : f.observedFrequency();
                 rows.add(new Row(s.id(), r.step().index(), s.frequency(), r.step().effectiveRate(), f.verdict(), lands,
-                        f.gainDb(), reason(result, s, r, f)));
+                        Double.isNaN(f.gainDb()) ? f.predictedGainDb() : f.gainDb(), f.reason()));
             }
         }
         return rows;
-    }
-
-    /** Why, in words, from what the result carries for this peak and rate. */
-    static String reason(SweepResult result, SourcePeak s, RateResult r, SourceFate f) {
-        double nyquist = r.step().nyquist();
-        return switch (f.verdict()) {
-            case SURVIVES -> "below Nyquist (" + Quantities.hz(nyquist) + "), seen at its own frequency";
-            case FOLDS -> "above Nyquist (" + Quantities.hz(nyquist) + "): folds to "
-                    + Quantities.hz(f.apparentFrequency());
-            case SUPPRESSED -> "not seen at " + Quantities.hz(f.apparentFrequency())
-                    + ": below what the spectrum shows at this rate";
-            case MERGES -> f.mergedInto() >= 0
-                    ? "lands within a bin of the stronger peak at "
-                            + Quantities.hz(result.sources().get(f.mergedInto()).frequency())
-                    : "lands within a bin of a stronger peak";
-            case UNEXPLAINED -> "a peak no source peak explains";
-        };
     }
 
     /** Per source peak: the lowest rate at which it is still true, in words. */
