@@ -112,7 +112,8 @@ final class LevelMapView {
                 int nyq = xOf(a, map.rateOf(row) / 2);
                 gc.setBackground(grey);
                 gc.fillRectangle(nyq, y, a.x + a.width - nyq, h);
-                if (row % Math.max(1, map.rowCount() / 8) == 0) {
+                int every = (int) Math.ceil((gc.getFontMetrics().getHeight() + 2) / Math.max(1, rh));
+                if (row % Math.max(1, every) == 0) {
                     gc.setForeground(d.getSystemColor(SWT.COLOR_BLACK));
                     gc.drawText(Quantities.rate(map.rateOf(row)), 4, y + (h - gc.getFontMetrics().getHeight()) / 2, true);
                 }

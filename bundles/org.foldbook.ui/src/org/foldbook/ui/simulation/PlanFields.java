@@ -99,11 +99,11 @@ final class PlanFields {
             if (!listChosen) {
                 spacing.select(p != null && p.getSpacing() == RateSpacing.LINEAR ? 1 : 0);
             }
-            from.setText(p == null || !(p.getMaxRateHz() > 0) ? "" : Quantities.number(p.getMaxRateHz()));
-            to.setText(p == null || !(p.getMinRateHz() > 0) ? "" : Quantities.number(p.getMinRateHz()));
+            from.setText(p == null || !(p.getMaxRateHz() > 0) ? "" : Quantities.plain(p.getMaxRateHz()));
+            to.setText(p == null || !(p.getMinRateHz() > 0) ? "" : Quantities.plain(p.getMinRateHz()));
             count.setText(p == null || p.getRateCount() < 1 ? "" : Integer.toString(p.getRateCount()));
-            bandLow.setText(p == null || p.getBandLowHz() == null ? "" : Quantities.number(p.getBandLowHz()));
-            bandHigh.setText(p == null || p.getBandHighHz() == null ? "" : Quantities.number(p.getBandHighHz()));
+            bandLow.setText(p == null || p.getBandLowHz() == null ? "" : Quantities.plain(p.getBandLowHz()));
+            bandHigh.setText(p == null || p.getBandHighHz() == null ? "" : Quantities.plain(p.getBandHighHz()));
             chains.clear();
             through.removeAll();
             through.add("its own chain");

@@ -68,7 +68,9 @@ public class SimulationPart {
     private WhatIfPane whatIfPane;
     private final CommandStackListener stackListener = e -> refreshPlan();
     private final Consumer<Object> selectionListener = this::follow;
-    private final Consumer<CurrentNotebook> notebookListener = c -> show(c.document(), null);
+    // the Notebook part may select a channel while the open is announced: keep what is selected then
+    private final Consumer<CurrentNotebook> notebookListener = c -> show(c.document(),
+            c.selection() instanceof Channel ch ? ch : null);
 
     @PostConstruct
     public void createControls(Composite parent) {
@@ -100,8 +102,9 @@ public class SimulationPart {
         plan = new PlanFields(parent, this::problem);
         GridDataFactory.fillDefaults().grab(true, false).applyTo(plan.control());
 
-        SashForm sash = new SashForm(parent, SWT.HORIZONTAL);
-        GridDataFactory.fillDefaults().grab(true, true).applyTo(sash);
+        SashForm split = new SashForm(parent, SWT.VERTICAL);
+        GridDataFactory.fillDefaults().grab(true, true).applyTo(split);
+        SashForm sash = new SashForm(split, SWT.HORIZONTAL);
         map = new LevelMapView(sash, this::pickFromMap);
         name(map.control(), "map");
         table = new Table(sash, SWT.BORDER | SWT.FULL_SELECTION | SWT.SINGLE);
@@ -122,14 +125,15 @@ public class SimulationPart {
         });
         sash.setWeights(45, 55);
 
-        Composite bottom = new Composite(parent, SWT.NONE);
+        Composite bottom = new Composite(split, SWT.NONE);
         GridLayoutFactory.fillDefaults().numColumns(2).spacing(8, 0).applyTo(bottom);
-        GridDataFactory.fillDefaults().grab(true, false).hint(SWT.DEFAULT, 230).applyTo(bottom);
         summary = new Text(bottom, SWT.MULTI | SWT.READ_ONLY | SWT.WRAP | SWT.V_SCROLL | SWT.BORDER);
         name(summary, "summary");
         GridDataFactory.fillDefaults().grab(false, true).hint(330, SWT.DEFAULT).applyTo(summary);
         whatIfPane = new WhatIfPane(bottom);
         GridDataFactory.fillDefaults().grab(true, true).applyTo(whatIfPane.control());
+
+        split.setWeights(50, 50);
 
         if (current != null) {
             current.addSelectionListener(selectionListener);

@@ -59,6 +59,7 @@ final class WhatIfPane {
         plot = new PlotView(pane, "", "Frequency (Hz)", "Level (dB)");
         SimulationPart.name(plot.control(), "whatIfPlot");
         plot.control().getTitle().setVisible(false);
+        plot.control().getLegend().setVisible(false);   // the markers are named in the line below the chart
         GridDataFactory.fillDefaults().span(4, 1).grab(true, true).applyTo(plot.control());
         landings = new Label(pane, SWT.WRAP);
         SimulationPart.name(landings, "whatIfLandings");
@@ -66,7 +67,7 @@ final class WhatIfPane {
         scale.addListener(SWT.Selection, e -> {
             if (model != null) {
                 double r = rateAt(scale.getSelection());
-                rate.setText(Quantities.number(r));
+                rate.setText(Quantities.plain(Math.rint(r)));
                 change(r);
             }
         });
@@ -94,7 +95,7 @@ final class WhatIfPane {
         }
         scale.setSelection(STEPS / 2);
         double r = rateAt(STEPS / 2);
-        rate.setText(Quantities.number(r));
+        rate.setText(Quantities.plain(Math.rint(r)));
         change(r);
     }
 
