@@ -59,14 +59,27 @@ public class SelfCheckAddon {
         // The workbench service exists only once start-up is complete, so it is looked up here.
         IWorkbench workbench = application.getContext().get(IWorkbench.class);
         Display display = Display.getCurrent();
-        display.timerExec(SETTLE_MILLIS, () -> SelfCheckSimulation.drive(display, application.getContext(),
-                mainShell(), () -> {
-                    try {
-                        runCheck(display, Path.of(folder));
-                    } finally {
-                        workbench.close();
-                    }
-                }));
+        display.timerExec(SETTLE_MILLIS, () -> {
+            if (System.getProperty(SelfCheckSimulation.PROPERTY) != null) {
+                showSimulationPart();   // a tab behind another: rendered once shown
+            }
+            SelfCheckSimulation.drive(display, application.getContext(), mainShell(), () -> {
+                try {
+                    runCheck(display, Path.of(folder));
+                } finally {
+                    workbench.close();
+                }
+            });
+        });
+    }
+
+    private void showSimulationPart() {
+        EPartService parts = mainWindowParts();
+        for (MPart part : modelService.findElements(application, "org.foldbook.ui.part.simulation", MPart.class)) {
+            if (parts != null) {
+                parts.showPart(part, EPartService.PartState.VISIBLE);
+            }
+        }
     }
 
     private void runCheck(Display display, Path folder) {
@@ -86,10 +99,6 @@ public class SelfCheckAddon {
                 report.add("display.size=" + screen.width + "x" + screen.height);
                 report.add("window.location=" + b.x + "," + b.y);
             }
-        }
-        if (mainShell != null) {
-            report.add("simulation.status=" + SelfCheckSimulation.text(mainShell, "status"));
-            report.add("simulation.whatIf=" + SelfCheckSimulation.text(mainShell, "whatIfState"));
         }
         try {
             Files.createDirectories(folder);
@@ -112,6 +121,11 @@ public class SelfCheckAddon {
                     report.add("part." + part.getElementId() + ".screenshot="
                             + saveScreenshot(display, (Control) part.getWidget(), shot));
                 }
+            }
+            if (mainShell != null) {
+                // after every part was shown: the rate sweep has followed the selected channel by now
+                report.add("simulation.status=" + SelfCheckSimulation.text(mainShell, "status"));
+                report.add("simulation.whatIf=" + SelfCheckSimulation.text(mainShell, "whatIfState"));
             }
             Files.write(folder.resolve("self-check.properties"), report, StandardCharsets.UTF_8);
         } catch (IOException e) {
