@@ -63,12 +63,8 @@ public final class ChannelReader {
      */
     public static ChannelData read(Channel channel, ReadRequest request, ReadProgress progress)
             throws ChannelDataException {
-        Path file = fileOf(channel);
+        Path file = existingFileOf(channel);
         Recording recording = channel.getRecording();
-        if (!Files.isRegularFile(file)) {
-            throw new ChannelDataException(file, Files.exists(file) ? "not a regular file"
-                    : "missing (the notebook expects recording " + recording.getId() + " here)");
-        }
         try (RecordingReader reader = open(file, recording)) {
             RecordingInfo info = reader.info();
             checkAgainstNotebook(file, info, channel, recording);
@@ -78,23 +74,13 @@ public final class ChannelReader {
             }
             double[] samples = readChannel(reader, info, channel.getChannelIndex(), file, progress);
             String sha = reader.sha256Hex().toLowerCase(Locale.ROOT);
-            String logged = recording.getSha256();
-            boolean changed = logged != null && !logged.isBlank() && !logged.equalsIgnoreCase(sha);
-            if (changed && !request.acceptChangedChecksum()) {
-                throw new ChannelDataException(file, "changed since it was logged: SHA-256 now " + sha
-                        + ", logged " + logged.toLowerCase(Locale.ROOT)
-                        + " (a different or edited file; accept it explicitly to go on)");
-            }
+            boolean changed = checksumChanged(file, recording, sha, request);
             String unit = info.channels().get(channel.getChannelIndex()).unit();
             return new ChannelData(file, samples, info.sampleRate(), sha, changed, unit);
         } catch (ChannelDataException | CancellationException e) {
             throw e;
-        } catch (RecordingFormatException e) {
-            throw new ChannelDataException(file, "cannot be read: " + e.getMessage(), e);
-        } catch (IOException e) {
-            throw new ChannelDataException(file, "cannot be read: " + e.getMessage(), e);
-        } catch (IllegalArgumentException e) {
-            throw new ChannelDataException(file, e.getMessage(), e);
+        } catch (IOException | IllegalArgumentException e) {
+            throw unreadable(file, e);
         }
     }
 
@@ -109,12 +95,8 @@ public final class ChannelReader {
      */
     public static ChannelStream stream(Channel channel, ChannelStream.BlockSink sink, ReadProgress progress)
             throws ChannelDataException {
-        Path file = fileOf(channel);
+        Path file = existingFileOf(channel);
         Recording recording = channel.getRecording();
-        if (!Files.isRegularFile(file)) {
-            throw new ChannelDataException(file, Files.exists(file) ? "not a regular file"
-                    : "missing (the notebook expects recording " + recording.getId() + " here)");
-        }
         try (RecordingReader reader = open(file, recording)) {
             RecordingInfo info = reader.info();
             int index = channel.getChannelIndex();
@@ -221,5 +203,40 @@ public final class ChannelReader {
             }
         }
         return x;
+    }
+
+    /** {@link #fileOf}, required to be an existing regular file. */
+    static Path existingFileOf(Channel channel) throws ChannelDataException {
+        Path file = fileOf(channel);
+        if (!Files.isRegularFile(file)) {
+            throw new ChannelDataException(file, Files.exists(file) ? "not a regular file"
+                    : "missing (the notebook expects recording " + channel.getRecording().getId() + " here)");
+        }
+        return file;
+    }
+
+    /**
+     * Whether {@code sha} differs from the checksum the notebook logged for {@code recording}; a change is an
+     * error naming the file unless {@code request} accepts it.
+     */
+    static boolean checksumChanged(Path file, Recording recording, String sha, ReadRequest request)
+            throws ChannelDataException {
+        String logged = recording.getSha256();
+        boolean changed = logged != null && !logged.isBlank() && !logged.equalsIgnoreCase(sha);
+        if (changed && !request.acceptChangedChecksum()) {
+            throw new ChannelDataException(file, "changed since it was logged: SHA-256 now " + sha
+                    + ", logged " + logged.toLowerCase(Locale.ROOT)
+                    + " (a different or edited file; accept it explicitly to go on)");
+        }
+        return changed;
+    }
+
+    /** A reader's failure as the error of this file: a damaged file, or one the notebook describes wrongly. */
+    static ChannelDataException unreadable(Path file, Exception e) {
+        if (e instanceof ChannelDataException c) {
+            return c;
+        }
+        return new ChannelDataException(file, e instanceof IllegalArgumentException ? e.getMessage()
+                : "cannot be read: " + e.getMessage(), e);
     }
 }

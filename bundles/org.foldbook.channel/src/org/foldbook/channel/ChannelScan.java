@@ -1,12 +1,10 @@
 package org.foldbook.channel;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.CancellationException;
 
-import org.foldbook.io.RecordingFormatException;
 import org.foldbook.io.RecordingInfo;
 import org.foldbook.io.RecordingReader;
 import org.foldbook.model.Channel;
@@ -53,12 +51,8 @@ public final class ChannelScan {
      */
     public static Scan scan(Channel channel, ChannelReader.ReadRequest request, Sink sink, ReadProgress progress)
             throws ChannelDataException {
-        Path file = ChannelReader.fileOf(channel);
+        Path file = ChannelReader.existingFileOf(channel);
         Recording recording = channel.getRecording();
-        if (!Files.isRegularFile(file)) {
-            throw new ChannelDataException(file, Files.exists(file) ? "not a regular file"
-                    : "missing (the notebook expects recording " + recording.getId() + " here)");
-        }
         try (RecordingReader reader = ChannelReader.open(file, recording)) {
             RecordingInfo info = reader.info();
             ChannelReader.checkAgainstNotebook(file, info, channel, recording);
@@ -87,22 +81,12 @@ public final class ChannelScan {
                 throw new ChannelDataException(file, "ended after " + pos + " of " + total + " frames");
             }
             String sha = reader.sha256Hex().toLowerCase(Locale.ROOT);
-            String logged = recording.getSha256();
-            boolean changed = logged != null && !logged.isBlank() && !logged.equalsIgnoreCase(sha);
-            if (changed && !request.acceptChangedChecksum()) {
-                throw new ChannelDataException(file, "changed since it was logged: SHA-256 now " + sha
-                        + ", logged " + logged.toLowerCase(Locale.ROOT)
-                        + " (a different or edited file; accept it explicitly to go on)");
-            }
+            boolean changed = ChannelReader.checksumChanged(file, recording, sha, request);
             return new Scan(file, info.sampleRate(), pos, sha, changed, info.channels().get(index).unit());
         } catch (ChannelDataException | CancellationException e) {
             throw e;
-        } catch (RecordingFormatException e) {
-            throw new ChannelDataException(file, "cannot be read: " + e.getMessage(), e);
-        } catch (IOException e) {
-            throw new ChannelDataException(file, "cannot be read: " + e.getMessage(), e);
-        } catch (IllegalArgumentException e) {
-            throw new ChannelDataException(file, e.getMessage(), e);
+        } catch (IOException | IllegalArgumentException e) {
+            throw ChannelReader.unreadable(file, e);
         }
     }
 }
