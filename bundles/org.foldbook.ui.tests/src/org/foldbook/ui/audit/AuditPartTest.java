@@ -27,9 +27,13 @@ import org.foldbook.dsp.fold.Folding;
 import org.foldbook.model.Channel;
 import org.foldbook.ui.notebook.CurrentNotebook;
 import org.foldbook.ui.notebook.NotebookDocument;
+import static org.foldbook.ui.testing.Widgets.find;
+import static org.foldbook.ui.testing.Widgets.findAll;
+
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.foldbook.ui.testing.Widgets;
 import org.junit.jupiter.api.io.TempDir;
 
 /** The audit part on the demo, real SWT widgets: run, findings, select, stop, report. */
@@ -119,36 +123,6 @@ class AuditPartTest {
     }
 
     private void waitFor(BooleanSupplier condition, String what) {
-        long end = System.nanoTime() + WAIT_NANOS;
-        while (!condition.getAsBoolean()) {
-            if (System.nanoTime() > end) {
-                fail(what + " did not finish");
-            }
-            if (!display.readAndDispatch()) {
-                display.sleep();
-            }
-        }
-    }
-
-    private static <T extends Control> T find(Control root, Class<T> type) {
-        List<T> all = findAll(root, type);
-        return all.isEmpty() ? fail("no " + type.getSimpleName()) : all.get(0);
-    }
-
-    private static <T extends Control> List<T> findAll(Control root, Class<T> type) {
-        List<T> found = new ArrayList<>();
-        collect(root, type, found);
-        return found;
-    }
-
-    private static <T extends Control> void collect(Control c, Class<T> type, List<T> found) {
-        if (type.isInstance(c)) {
-            found.add(type.cast(c));
-        }
-        if (c instanceof Composite comp) {
-            for (Control child : comp.getChildren()) {
-                collect(child, type, found);
-            }
-        }
+        Widgets.waitFor(display, condition, what, WAIT_NANOS);
     }
 }

@@ -32,10 +32,14 @@ import org.foldbook.model.Channel;
 import org.foldbook.model.Experiment;
 import org.foldbook.model.SignalChain;
 import org.foldbook.demo.GearboxDemo;
+import static org.foldbook.ui.testing.Widgets.find;
+import static org.foldbook.ui.testing.Widgets.findAll;
+
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
+import org.foldbook.ui.testing.Widgets;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
@@ -361,22 +365,6 @@ class NotebookPartTest {
                 .findFirst().orElse("");
     }
 
-    private void waitFor(BooleanSupplier condition, String what) {
-        long end = System.nanoTime() + WAIT_NANOS;
-        while (!condition.getAsBoolean()) {
-            if (System.nanoTime() > end) {
-                fail(what + " did not finish");
-            }
-            if (!display.readAndDispatch()) {
-                try {
-                    Thread.sleep(10);
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                    fail("interrupted");
-                }
-            }
-        }
-    }
 
     private static List<String> texts(TreeItem[] items) {
         List<String> out = new ArrayList<>();
@@ -386,25 +374,7 @@ class NotebookPartTest {
         return out;
     }
 
-    private static <T extends Control> T find(Control root, Class<T> type) {
-        List<T> all = findAll(root, type);
-        return all.isEmpty() ? fail("no " + type.getSimpleName()) : all.get(0);
-    }
-
-    private static <T extends Control> List<T> findAll(Control root, Class<T> type) {
-        List<T> found = new ArrayList<>();
-        collect(root, type, found);
-        return found;
-    }
-
-    private static <T extends Control> void collect(Control c, Class<T> type, List<T> found) {
-        if (type.isInstance(c)) {
-            found.add(type.cast(c));
-        }
-        if (c instanceof Composite comp && !(c instanceof Chart)) {
-            for (Control child : comp.getChildren()) {
-                collect(child, type, found);
-            }
-        }
+    private void waitFor(BooleanSupplier condition, String what) {
+        Widgets.waitFor(display, condition, what, WAIT_NANOS);
     }
 }

@@ -36,6 +36,7 @@ import org.foldbook.ui.notebook.NotebookDocument;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.foldbook.ui.testing.Widgets;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
@@ -188,19 +189,6 @@ class RecordingPartTest {
     }
 
     private void waitFor(BooleanSupplier condition, String what) {
-        long end = System.nanoTime() + WAIT_NANOS;
-        while (!condition.getAsBoolean()) {
-            if (System.nanoTime() > end) {
-                fail(what + " did not finish");
-            }
-            if (!display.readAndDispatch()) {
-                try {
-                    Thread.sleep(5);
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                    fail("interrupted");
-                }
-            }
-        }
+        Widgets.waitFor(display, condition, what, WAIT_NANOS);
     }
 }
