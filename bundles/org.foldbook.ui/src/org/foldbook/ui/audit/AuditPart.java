@@ -24,6 +24,7 @@ import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 import org.foldbook.audit.HtmlReport;
 import org.foldbook.audit.NotebookAudit;
+import org.foldbook.ui.export.ExportMenu;
 import org.foldbook.ui.notebook.CurrentNotebook;
 import org.foldbook.ui.notebook.NotebookDocument;
 
@@ -84,6 +85,7 @@ public class AuditPart {
             col.setWidth(Integer.parseInt(c[1]));
         }
         GridDataFactory.fillDefaults().span(4, 1).grab(true, true).applyTo(table);
+        ExportMenu.attach(table, "Audit findings");
         detail = new Label(parent, SWT.WRAP);
         GridDataFactory.fillDefaults().span(4, 1).grab(true, false).hint(300, SWT.DEFAULT).applyTo(detail);
         table.addListener(SWT.Selection, e -> showDetail(table.getSelectionIndex()));

@@ -29,6 +29,7 @@ import org.foldbook.model.SimulationRun;
 import org.foldbook.model.SweepMode;
 import org.foldbook.model.derived.Quantities;
 import org.foldbook.sweep.SweepResult;
+import org.foldbook.ui.export.ExportMenu;
 import org.foldbook.ui.notebook.CurrentNotebook;
 import org.foldbook.ui.notebook.NotebookDocument;
 
@@ -117,6 +118,7 @@ public class SimulationPart {
             c.setText(VerdictRows.COLUMNS[i]);
             c.setWidth(widths[i]);
         }
+        ExportMenu.attach(table, "Verdicts per source peak and rate");
         table.addListener(SWT.Selection, e -> {
             int i = table.getSelectionIndex();
             if (i >= 0) {
