@@ -31,7 +31,7 @@ class PeerAgreementTest {
         engine = new SweepEngine(2);
         signal = TestData.float64("peer_signal.f64");
         grid = RateLadder.readGrid(TestData.reader("peer_grid.txt"), "peer_grid.txt", FS0);
-        details = MiniJson.obj(MiniJson.parse(TestData.text("peer_details.json")));
+        details = TestJson.obj(TestJson.parse(TestData.text("peer_details.json")));
     }
 
     @AfterAll
@@ -43,7 +43,7 @@ class PeerAgreementTest {
     @DisplayName("bare-kernel mode: every rate's peaks = peer mode a (scipy welch + find_peaks), levels within 0.01 dB")
     void bareModeMatchesPeerModeA() {
         SweepResult r = engine.run(signal, grid, Resampling.bareKernel(), SpectrumSettings.PROMINENCE_ONLY, SweepProgress.NONE);
-        assertSameAsPeer(r, MiniJson.arr(details.get("a")));
+        assertSameAsPeer(r, TestJson.arr(details.get("a")));
     }
 
     @Test
@@ -51,14 +51,14 @@ class PeerAgreementTest {
     void peerPolyModeMatchesPeerModeB() {
         SweepResult r = engine.run(signal, grid, Resampling.polyphaseDefault(), SpectrumSettings.PROMINENCE_ONLY,
                 SweepProgress.NONE);
-        assertSameAsPeer(r, MiniJson.arr(details.get("b")));
+        assertSameAsPeer(r, TestJson.arr(details.get("b")));
     }
 
     static void assertSameAsPeer(SweepResult r, List<Object> peer) {
         assertEquals(peer.size(), r.rates().size(), "rate count");
         int compared = 0;
         for (Object o : peer) {
-            Map<String, Object> pr = MiniJson.obj(o);
+            Map<String, Object> pr = TestJson.obj(o);
             int index = ((Double) pr.get("index")).intValue();
             RateResult mine = r.rates().get(index);
             assertEquals(((Double) pr.get("up")).intValue(), mine.step().up(), "up at rate " + index);
@@ -66,8 +66,8 @@ class PeerAgreementTest {
             assertEquals(((Double) pr.get("n_out")).longValue(), mine.outputSamples(), "n_out at rate " + index);
             assertEquals((Double) pr.get("fs") / (Double) pr.get("nperseg"), mine.binWidth(), 1e-9,
                     "bin width at rate " + index);
-            List<Object> f = MiniJson.arr(pr.get("freqs"));
-            List<Object> l = MiniJson.arr(pr.get("levels_db"));
+            List<Object> f = TestJson.arr(pr.get("freqs"));
+            List<Object> l = TestJson.arr(pr.get("levels_db"));
             List<Double> myF = new ArrayList<>();
             for (ObservedPeak p : mine.observed()) {
                 myF.add(p.frequency());

@@ -27,25 +27,25 @@ class SweepResultFormatTest {
     @DisplayName("JSON: per rate index, up, down, effective rate, peaks with frequency, level, verdict, source peak")
     void jsonShape() {
         SweepResult r = sample();
-        Map<String, Object> root = MiniJson.obj(MiniJson.parse(r.toJson()));
+        Map<String, Object> root = TestJson.obj(TestJson.parse(r.toJson()));
         assertEquals("foldbook-sweep", root.get("format"));
         assertEquals(1.0, root.get("version"));
         assertEquals("bare", root.get("mode"));
-        Map<String, Object> src = MiniJson.obj(root.get("source"));
+        Map<String, Object> src = TestJson.obj(root.get("source"));
         assertEquals(19.0, src.get("rate"));
-        assertEquals(2, MiniJson.arr(src.get("peaks")).size());
-        List<Object> rates = MiniJson.arr(root.get("rates"));
+        assertEquals(2, TestJson.arr(src.get("peaks")).size());
+        List<Object> rates = TestJson.arr(root.get("rates"));
         assertEquals(3, rates.size());
         Set<String> verdicts = Set.of("survives", "folds", "unexplained");
         for (int i = 0; i < rates.size(); i++) {
-            Map<String, Object> rate = MiniJson.obj(rates.get(i));
+            Map<String, Object> rate = TestJson.obj(rates.get(i));
             assertEquals((double) i, rate.get("index"));
             RateStep st = r.rates().get(i).step();
             assertEquals((double) st.up(), rate.get("up"));
             assertEquals((double) st.down(), rate.get("down"));
             assertEquals(st.effectiveRate(), (Double) rate.get("rate"), 0.0, "exact round trip of the rate");
-            for (Object o : MiniJson.arr(rate.get("peaks"))) {
-                Map<String, Object> p = MiniJson.obj(o);
+            for (Object o : TestJson.arr(rate.get("peaks"))) {
+                Map<String, Object> p = TestJson.obj(o);
                 assertTrue(p.get("frequency") instanceof Double);
                 assertTrue(p.get("levelDb") instanceof Double);
                 assertTrue(verdicts.contains(p.get("verdict")), String.valueOf(p.get("verdict")));
@@ -55,15 +55,15 @@ class SweepResultFormatTest {
                     assertTrue(p.get("sourcePeak") instanceof Double);
                 }
             }
-            assertEquals(2, MiniJson.arr(rate.get("sources")).size());
+            assertEquals(2, TestJson.arr(rate.get("sources")).size());
         }
         // 1.5 Hz at 1.9 S/s: folds to 0.4 Hz (common practice)
-        Map<String, Object> last = MiniJson.obj(MiniJson.arr(MiniJson.obj(rates.get(2)).get("sources")).get(0));
+        Map<String, Object> last = TestJson.obj(TestJson.arr(TestJson.obj(rates.get(2)).get("sources")).get(0));
         assertEquals("folds", last.get("verdict"));
         assertEquals(0.4, (Double) last.get("apparentFrequency"), 0.01);
-        Map<String, Object> summary = MiniJson.obj(root.get("summary"));
-        assertEquals(2, MiniJson.arr(summary.get("peaks")).size());
-        Map<String, Object> band = MiniJson.obj(summary.get("band"));
+        Map<String, Object> summary = TestJson.obj(root.get("summary"));
+        assertEquals(2, TestJson.arr(summary.get("peaks")).size());
+        Map<String, Object> band = TestJson.obj(summary.get("band"));
         assertEquals(0.5, band.get("high"));
         // band 0..0.5 Hz: at 9.5 S/s the 4 Hz tone stays put; at 1.9 S/s 1.5 Hz folds to 0.4 Hz, into the band
         assertEquals(9.5, (Double) band.get("lowestAliasFreeRate"), 1e-12);
@@ -77,9 +77,9 @@ class SweepResultFormatTest {
                 .endArray().endObject().toString();
         assertEquals("{\"a\\\"b\\\\\\n\":\"x\\u0001y\",\"nan\":null,\"third\":0.3333333333333333,\"n\":42,"
                 + "\"list\":[true,null]}", s);
-        Map<String, Object> m = MiniJson.obj(MiniJson.parse(s));
+        Map<String, Object> m = TestJson.obj(TestJson.parse(s));
         assertEquals(1.0 / 3, m.get("third"));
-        assertThrows(IllegalArgumentException.class, () -> MiniJson.parse("{\"a\":1,}"));
+        assertThrows(IllegalArgumentException.class, () -> TestJson.parse("{\"a\":1,}"));
     }
 
     @Test
@@ -110,13 +110,13 @@ class SweepResultFormatTest {
             SweepResult r = e.run(x, RateLadder.ofRates(fs0, new double[] {24_000}, 100),
                     Resampling.modelledFilter(org.foldbook.dsp.filter.AnalogLowPass.butterworth(4, 40_000)),
                     SpectrumSettings.DEFAULT, SweepProgress.NONE);
-            Map<String, Object> root = MiniJson.obj(MiniJson.parse(r.toJson()));
-            Map<String, Object> acc = MiniJson.obj(root.get("accuracy"));
+            Map<String, Object> root = TestJson.obj(TestJson.parse(r.toJson()));
+            Map<String, Object> acc = TestJson.obj(root.get("accuracy"));
             assertEquals(0.49 * fs0, (Double) acc.get("upToHz"), 1e-9);
             assertTrue(((String) acc.get("statement")).contains("0.1 dB"));
-            List<Object> w = MiniJson.arr(root.get("warnings"));
+            List<Object> w = TestJson.arr(root.get("warnings"));
             assertEquals(2, w.size(), w.toString());
-            Map<String, Object> unrecorded = MiniJson.obj(w.get(1));
+            Map<String, Object> unrecorded = TestJson.obj(w.get(1));
             assertEquals(fs0 / 2, (Double) unrecorded.get("fromHz"), 1e-9);
             assertNull(unrecorded.get("uncertaintyDb"), "content may be missing altogether: no finite bound");
             assertTrue(((String) unrecorded.get("text")).contains("missing"));
