@@ -16,6 +16,8 @@ import org.foldbook.channel.ChannelReader;
 import org.foldbook.channel.ChannelStream;
 import org.foldbook.channel.ReadProgress;
 import org.foldbook.dsp.filter.FrequencyResponse;
+import org.foldbook.dsp.spectrum.Welch;
+import org.foldbook.dsp.spectrum.WelchAccumulator;
 import org.foldbook.model.Channel;
 import org.foldbook.model.Digitizer;
 import org.foldbook.model.Experiment;
@@ -182,12 +184,13 @@ public final class Auditor {
         // full scale is known for PCM files (values are fractions of it); text and raw files leave it open
         SampleStatistics stats = new SampleStatistics(policy.clipFraction(), policy.dropoutSamples(),
                 policy.flatSamples());
-        BlockWelch welch = new BlockWelch(spectrumSettings.maxSegment(), sampleRate);
+        // periodic Hann, 50 % overlap, constant detrend, density (scipy.signal.welch's defaults)
+        WelchAccumulator welch = new WelchAccumulator(Welch.builder(spectrumSettings.maxSegment()).build(), sampleRate);
         ChannelStream s;
         try {
             s = ChannelReader.stream(channel, (x, n) -> {
                 stats.accept(x, n);
-                welch.accept(x, n);
+                addFiniteOrZero(welch, x, n);
             }, new ReadProgress() {
                 @Override
                 public void framesRead(long done, long total) {
@@ -224,18 +227,38 @@ public final class Auditor {
                     + " samples in '" + s.unit() + "'): rails and range use are not checked");
         }
         DataAudit.samples(at, counted, fullScale, bits, sampleRate, policy);
-        double[] psd = welch.finish();
-        if (psd.length == 0) {
+        int segment = welch.welch().segmentLength();
+        if (welch.segments() == 0) {
             at.add(AuditKind.SETTING_MISSING, Severity.INFO, "shorter than one spectrum segment of "
-                    + welch.segmentLength() + " samples: no spectrum");
+                    + segment + " samples: no spectrum");
             return Optional.empty();
         }
+        double[] psd = new double[welch.welch().bins()];
+        welch.finish(psd);
         // the accumulator ran at the notebook's rate; the file's own rate places the bins (density scales by the ratio)
         double fileRate = s.rateHz() > 0 ? s.rateHz() : sampleRate;
         for (int k = 0; k < psd.length; k++) {
             psd[k] *= sampleRate / fileRate;
         }
-        return Optional.of(new ChannelSpectrum(fileRate, fileRate / welch.segmentLength(), psd, fullScale));
+        return Optional.of(new ChannelSpectrum(fileRate, fileRate / segment, psd, fullScale));
+    }
+
+    /**
+     * Feeds {@code x[0..n)} with non-finite samples as 0: they are reported by the statistics, and one bad
+     * value must not void the spectrum. Written straight into the accumulator's buffer, no copy.
+     */
+    private static void addFiniteOrZero(WelchAccumulator welch, double[] x, int n) {
+        for (int off = 0; off < n; ) {
+            int take = Math.min(welch.room(), n - off);
+            double[] buf = welch.buffer();
+            int at = welch.position();
+            for (int i = 0; i < take; i++) {
+                double v = x[off + i];
+                buf[at + i] = Double.isFinite(v) ? v : 0.0;
+            }
+            welch.advance(take);
+            off += take;
+        }
     }
 
     /**

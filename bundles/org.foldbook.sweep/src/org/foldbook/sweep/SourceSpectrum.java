@@ -7,6 +7,7 @@ import org.foldbook.dsp.Check;
 import org.foldbook.dsp.peaks.PeakFinder;
 import org.foldbook.dsp.peaks.SpectralPeak;
 import org.foldbook.dsp.spectrum.Welch;
+import org.foldbook.dsp.spectrum.WelchAccumulator;
 import org.foldbook.dsp.window.WindowShape;
 
 /**
@@ -44,9 +45,8 @@ public final class SourceSpectrum {
         Check.positive("sourceRate", sourceRate);
         int seg = settings.segmentFor(source.length);
         // through the same accumulator as the streaming sweep, so both give this PSD to the last bit
-        StreamingWelch acc = new StreamingWelch(seg);
-        acc.reset(Welch.builder(seg).build(), sourceRate);
-        acc.accept(source, 0, source.length);
+        WelchAccumulator acc = new WelchAccumulator(Welch.builder(seg).build(), sourceRate);
+        acc.add(source, 0, source.length);
         double[] p = new double[seg / 2 + 1];
         acc.finish(p);
         return fromPsd(p, sourceRate, source.length, seg, settings);

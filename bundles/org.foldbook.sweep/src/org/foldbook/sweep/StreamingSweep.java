@@ -22,6 +22,7 @@ import org.foldbook.dsp.peaks.SpectralPeak;
 import org.foldbook.dsp.resample.ResampleRun;
 import org.foldbook.dsp.resample.Resampler;
 import org.foldbook.dsp.spectrum.Welch;
+import org.foldbook.dsp.spectrum.WelchAccumulator;
 
 /**
  * The sweep of a recording of any length: the source is read once, front to back, in blocks of
@@ -32,7 +33,7 @@ import org.foldbook.dsp.spectrum.Welch;
  *
  * <p>The answers are those of {@link SweepEngine#run} on the same samples, bit for bit: the re-samplers
  * compute every output in one fixed order whatever the block edges, the Welch accumulator is the same
- * ({@link StreamingWelch}, also behind {@link SourceSpectrum#of}), and the once-per-sweep filter of the
+ * ({@link WelchAccumulator}, also behind {@link SourceSpectrum#of}), and the once-per-sweep filter of the
  * modelled mode (its exact chain filter, overlap-save) runs over the blocks ({@link Resampling#blockPrepare}).
  *
  * <p><b>Threads.</b> A fixed pool of daemon threads. For each block the rates are handed out from a
@@ -120,8 +121,8 @@ public final class StreamingSweep implements AutoCloseable {
         double fs0 = ladder.sourceRate();
         Map<Integer, Welch> welchBySegment = new ConcurrentHashMap<>();
         int sourceSegment = settings.segmentFor(n);
-        StreamingWelch sourceWelch = new StreamingWelch(sourceSegment);
-        sourceWelch.reset(welchBySegment.computeIfAbsent(sourceSegment, s -> Welch.builder(s).build()), fs0);
+        WelchAccumulator sourceWelch = new WelchAccumulator(
+                welchBySegment.computeIfAbsent(sourceSegment, s -> Welch.builder(s).build()), fs0);
         Resampling.Preparation pre = mode.blockPrepare(fs0);
         long seriesLength = pre == null ? n : pre.outputLength(n); // what the rates' re-samplers take in
         List<RateState> rates = new ArrayList<>(ladder.size());
@@ -149,7 +150,7 @@ public final class StreamingSweep implements AutoCloseable {
                 throw new IllegalArgumentException("source delivered more than its " + n + " samples");
             }
             requireFinite(block, got, read);
-            sourceWelch.accept(block, 0, got);
+            sourceWelch.add(block, 0, got);
             if (prepared != null) {
                 prepared.push(block, 0, got);
             } else {
@@ -262,7 +263,7 @@ public final class StreamingSweep implements AutoCloseable {
         final RateStep step;
         final long outputs;
         final Welch welch;
-        final StreamingWelch acc;
+        final WelchAccumulator acc;
         final ResampleRun run;
 
         RateState(RateStep step, long seriesLength, Resampling mode, SpectrumSettings settings,
@@ -272,9 +273,8 @@ public final class StreamingSweep implements AutoCloseable {
             this.outputs = resampler.outputLength(seriesLength);
             int seg = settings.segmentFor(outputs);
             this.welch = welchBySegment.computeIfAbsent(seg, s -> Welch.builder(s).build());
-            this.acc = new StreamingWelch(seg);
-            acc.reset(welch, step.effectiveRate());
-            this.run = resampler.start(acc);
+            this.acc = new WelchAccumulator(welch, step.effectiveRate());
+            this.run = resampler.start(acc::add);
         }
 
         RateResult finish(SpectrumSettings settings, VerdictClassifier classifier, Resampling mode) {

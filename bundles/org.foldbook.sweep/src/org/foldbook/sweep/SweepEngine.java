@@ -22,6 +22,7 @@ import org.foldbook.dsp.resample.RandomAccessResampler;
 import org.foldbook.dsp.resample.ResampleRun;
 import org.foldbook.dsp.resample.Resampler;
 import org.foldbook.dsp.spectrum.Welch;
+import org.foldbook.dsp.spectrum.WelchAccumulator;
 
 /**
  * Runs sweeps: for every rate of a ladder, re-sample the recording, take its Welch PSD, find its peaks and
@@ -160,7 +161,7 @@ public final class SweepEngine implements AutoCloseable {
                 first += count;
             }
         } else {
-            ResampleRun run = resampler.start(ws.welch);
+            ResampleRun run = resampler.start(ws.welch::add);
             for (int off = 0; off < x.length; off += BLOCK) {
                 if (progress.isCancelled()) {
                     throw new CancellationException("sweep cancelled");
@@ -188,11 +189,11 @@ public final class SweepEngine implements AutoCloseable {
 
     /** Per-thread buffers, reused from rate to rate. */
     private static final class WorkerState {
-        final StreamingWelch welch;
+        final WelchAccumulator welch;
         final double[] psd;
 
         WorkerState(int maxSegment) {
-            welch = new StreamingWelch(maxSegment);
+            welch = new WelchAccumulator(maxSegment);
             psd = new double[maxSegment / 2 + 1];
         }
     }

@@ -9,7 +9,7 @@
  * <li>{@link org.foldbook.sweep.Resampling}: the modes — bare sampler, the channel's modelled chain,
  * ideal decimator, scipy-resample_poly-compatible — each with its |H(f)|²;</li>
  * <li>{@link org.foldbook.sweep.SweepEngine}: fixed thread pool over rates; per rate re-sample →
- * Welch PSD (streamed, {@link org.foldbook.sweep.StreamingWelch}) → peaks → verdicts;</li>
+ * Welch PSD (streamed, {@link org.foldbook.dsp.spectrum.WelchAccumulator}) → peaks → verdicts;</li>
  * <li>{@link org.foldbook.sweep.FoldPreview}: the same verdicts from the source PSD alone, without
  * touching samples;</li>
  * <li>{@link org.foldbook.sweep.VerdictClassifier}: the verdict rules;

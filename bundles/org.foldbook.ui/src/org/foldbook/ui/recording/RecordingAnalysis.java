@@ -52,7 +52,7 @@ public final class RecordingAnalysis {
             throw new ChannelDataException(scan.file(), "holds " + scan.frames()
                     + " samples, fewer than one spectrum segment of " + segmentLength(scan.frames()));
         }
-        var spectrum = reducers.welch.result();
+        var spectrum = reducers.welch.finish(Unit.FULL_SCALE);
         List<SpectralPeak> peaks = new ArrayList<>(reducers.finder.find(spectrum));
         peaks.sort(Comparator.comparingDouble(SpectralPeak::levelDb).reversed());
         if (peaks.size() > MAX_PEAKS) {
@@ -73,7 +73,7 @@ public final class RecordingAnalysis {
         public void start(RecordingInfo info) {
             envelope = new MinMaxEnvelope(info.frameCount(), COLUMNS);
             Welch w = Welch.builder(segmentLength(info.frameCount())).scaling(PsdScaling.SPECTRUM).build();
-            welch = new WelchAccumulator(w, info.sampleRate(), Unit.FULL_SCALE);
+            welch = new WelchAccumulator(w, info.sampleRate());
             // 10 dB prominent and 12 dB over the running median of 63 bins (common practice for tones
             // in noise); the Hann kernel corrects the level between bins
             finder = PeakFinder.builder().prominenceDb(10).noiseFloor(63, 12).minSeparationBins(3)
