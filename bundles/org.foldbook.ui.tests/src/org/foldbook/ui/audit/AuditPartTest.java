@@ -3,7 +3,6 @@ package org.foldbook.ui.audit;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -110,16 +109,11 @@ class AuditPartTest {
     }
 
     private void press(String text) {
-        findButton(text).notifyListeners(SWT.Selection, new Event());
+        Widgets.select(findButton(text));
     }
 
     private Button findButton(String text) {
-        for (Button b : findAll(shell, Button.class)) {
-            if (b.getText().equals(text)) {
-                return b;
-            }
-        }
-        return fail("no button " + text);
+        return Widgets.button(shell, text);
     }
 
     private void waitFor(BooleanSupplier condition, String what) {

@@ -1,14 +1,16 @@
 package org.foldbook.ui.parts;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.fail;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.foldbook.ui.testing.Widgets.find;
+import static org.foldbook.ui.testing.Widgets.findAll;
+import static org.foldbook.ui.testing.Widgets.waitFor;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.List;
 
 import org.eclipse.swt.SWT;
-import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Shell;
@@ -66,9 +68,9 @@ class FoldExplorerPartTest {
     @Test
     void editingTheFieldsRecomputes() {
         new FoldExplorerPart().createControls(shell);
-        Text[] fields = findAll(shell, Text.class);
-        fields[0].setText("1.5");
-        fields[1].setText("1.9");
+        List<Text> fields = findAll(shell, Text.class);
+        fields.get(0).setText("1.5");
+        fields.get(1).setText("1.9");
         Table table = find(shell, Table.class);
         assertEquals(1, table.getItemCount());
         // 1.5 Hz sampled at 1.9 S/s appears at 0.4 Hz (common practice)
@@ -79,11 +81,11 @@ class FoldExplorerPartTest {
     @Test
     void badInputIsShownNotThrown() {
         new FoldExplorerPart().createControls(shell);
-        Text[] fields = findAll(shell, Text.class);
-        fields[1].setText("-3");
+        List<Text> fields = findAll(shell, Text.class);
+        fields.get(1).setText("-3");
         Label status = find(shell, Label.class, l -> (l.getStyle() & SWT.WRAP) != 0);
         assertTrue(status.getText().startsWith("Sample rate must be a positive number"), status.getText());
-        fields[1].setText("fast");
+        fields.get(1).setText("fast");
         assertTrue(status.getText().contains("not a number"), status.getText());
     }
 
@@ -100,15 +102,9 @@ class FoldExplorerPartTest {
             Channel housing = document.notebook().getExperiments().get(0).getChannels().get(0);
             assertEquals("housing Z", housing.getName());
             current.select(housing);
-            long end = System.nanoTime() + 120_000_000_000L;
-            while (part.job() != null) {
-                assertTrue(System.nanoTime() < end, "reading the peaks did not finish");
-                if (!display.readAndDispatch()) {
-                    display.sleep();
-                }
-            }
-            Text[] fields = findAll(shell, Text.class);
-            assertEquals("25600.0", fields[1].getText(), "the channel's rate (GearboxDemo: 25.6 kS/s)");
+            waitFor(display, () -> part.job() == null, "reading the peaks", 120_000_000_000L);
+            List<Text> fields = findAll(shell, Text.class);
+            assertEquals("25600.0", fields.get(1).getText(), "the channel's rate (GearboxDemo: 25.6 kS/s)");
             Table table = find(shell, Table.class);
             assertEquals(FoldExplorerPart.SOURCE_PEAKS, table.getItemCount());
             boolean mesh = false;
@@ -131,38 +127,6 @@ class FoldExplorerPartTest {
             part.dispose();
         } finally {
             document.dispose();
-        }
-    }
-
-    private static <T extends Control> T find(Control root, Class<T> type) {
-        return find(root, type, c -> true);
-    }
-
-    private static <T extends Control> T find(Control root, Class<T> type, java.util.function.Predicate<T> ok) {
-        T[] all = findAll(root, type);
-        for (T t : all) {
-            if (ok.test(t)) {
-                return t;
-            }
-        }
-        return fail("no matching " + type.getSimpleName() + " in the part");
-    }
-
-    @SuppressWarnings("unchecked")
-    private static <T extends Control> T[] findAll(Control root, Class<T> type) {
-        java.util.List<T> found = new java.util.ArrayList<>();
-        collect(root, type, found);
-        return found.toArray((T[]) java.lang.reflect.Array.newInstance(type, 0));
-    }
-
-    private static <T extends Control> void collect(Control c, Class<T> type, java.util.List<T> found) {
-        if (type.isInstance(c)) {
-            found.add(type.cast(c));
-        }
-        if (c instanceof org.eclipse.swt.widgets.Composite comp && !(c instanceof Chart)) {
-            for (Control child : comp.getChildren()) {
-                collect(child, type, found);
-            }
         }
     }
 }

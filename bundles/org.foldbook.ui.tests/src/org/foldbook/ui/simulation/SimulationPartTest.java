@@ -6,13 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.function.BooleanSupplier;
 
 import org.eclipse.swt.SWT;
@@ -39,6 +36,7 @@ import org.foldbook.model.derived.Quantities;
 import org.foldbook.sweep.SweepEngine;
 import org.foldbook.sweep.SweepProgress;
 import org.foldbook.ui.notebook.NotebookDocument;
+import org.foldbook.ui.testing.Widgets;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -265,7 +263,7 @@ class SimulationPartTest {
     private void push(String id) {
         Button b = (Button) control(id);
         assertTrue(b.isEnabled(), id + " is enabled");
-        b.notifyListeners(SWT.Selection, new Event());
+        Widgets.select(b);
     }
 
     private static void click(Control c, int x, int y) {
@@ -281,36 +279,10 @@ class SimulationPartTest {
     }
 
     private Control control(String id) {
-        List<Control> found = new ArrayList<>();
-        collect(shell, id, found);
-        return found.isEmpty() ? fail("no control '" + id + "'") : found.get(0);
-    }
-
-    private static void collect(Control c, String id, List<Control> found) {
-        if (id.equals(c.getData(SimulationPart.ID))) {
-            found.add(c);
-        }
-        if (c instanceof Composite comp) {
-            for (Control child : comp.getChildren()) {
-                collect(child, id, found);
-            }
-        }
+        return Widgets.tagged(shell, SimulationPart.ID, id);
     }
 
     private void waitUntil(String what, BooleanSupplier condition) {
-        long end = System.nanoTime() + WAIT_NANOS;
-        while (!condition.getAsBoolean()) {
-            if (System.nanoTime() > end) {
-                fail(what + " did not finish; status: " + label("status").getText());
-            }
-            if (!display.readAndDispatch()) {
-                try {
-                    Thread.sleep(10);
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                    fail("interrupted");
-                }
-            }
-        }
+        Widgets.waitFor(display, condition, what, WAIT_NANOS, () -> "status: " + label("status").getText());
     }
 }

@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.foldbook.ui.testing.Widgets.find;
+import static org.foldbook.ui.testing.Widgets.findAll;
 
 import java.io.IOException;
 import java.nio.file.Path;
@@ -15,7 +17,6 @@ import org.eclipse.swt.layout.FillLayout;
 import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
-import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Shell;
@@ -27,6 +28,7 @@ import org.foldbook.model.derived.ChainFigures;
 import org.foldbook.demo.GearboxDemo;
 import org.foldbook.ui.notebook.CurrentNotebook;
 import org.foldbook.ui.notebook.NotebookDocument;
+import org.foldbook.ui.testing.Widgets;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.DisplayName;
@@ -103,7 +105,7 @@ class WalkthroughPartTest {
     void whatIfAndKeep() {
         part.session().goTo(4);
         click(button("Next ▶")); // already last: stays
-        Text rate = (Text) find(shell, Text.class, t -> t.getText().equals("25600"));
+        Text rate = find(shell, Text.class, t -> t.getText().equals("25600"));
         rate.setText("51200");
         pump(50);
         assertEquals("51.2 kS/s", figures().get("Sampling rate"));
@@ -126,9 +128,9 @@ class WalkthroughPartTest {
     @Test
     @DisplayName("camera chain: the mark turns forward at 1000 frames/s, backward at 25 frames/s; the animation runs")
     void cameraChain() {
-        Combo chains = (Combo) find(shell, Combo.class, c -> c.getItemCount() == 5);
+        Combo chains = find(shell, Combo.class, c -> c.getItemCount() == 5);
         chains.select(3);
-        chains.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
+        Widgets.select(chains);
         click(button("Next ▶"));
         assertEquals("Camera: CAM-HS", part.session().page().title());
         assertEquals("+24.5 rev/s (forward)", figures().get("Apparent rotation"));
@@ -136,7 +138,7 @@ class WalkthroughPartTest {
         Spinner fps = part.pageView().frameRate();
         assertTrue(fps.isVisible());
         fps.setSelection(250); // 25.0 frames/s
-        fps.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
+        Widgets.select(fps);
         pump(300); // a few animation ticks on the UI thread
         screenshot("walkthrough-camera.png");
         // 24.5 − round(24.5/25)·25 = −0.5 (fold formula)
@@ -156,35 +158,12 @@ class WalkthroughPartTest {
         org.jsoup.nodes.Document page = org.jsoup.Jsoup.parse(file.toFile(), "UTF-8");
         assertEquals(5, page.select("section.chain").size()); // the demo rig's five chains
         assertEquals(1 + 4 + 4 + 2 + 1 + 3, page.select("section.stage").size()); // cautions + every stage
-        Label status = null;
-        for (long end = System.currentTimeMillis() + 20_000; status == null && System.currentTimeMillis() < end;) {
-            pump(50); // the job tells the part through Display.asyncExec
-            status = (Label) find(shell, Label.class, l -> l.getText().startsWith("Walkthrough written to "));
-        }
-        assertNotNull(status, "the part did not say where the page went");
+        // the job tells the part through Display.asyncExec
+        Widgets.waitFor(display, () -> !findAll(shell, Label.class, l -> l.getText().startsWith("Walkthrough written to "))
+                .isEmpty(), "saying where the page went", 20_000_000_000L);
         java.nio.file.Files.createDirectories(Path.of("target", "screenshots")); // kept for a person to look at
         java.nio.file.Files.copy(file, Path.of("target", "screenshots", "walkthrough-gb-2.html"),
                 java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-    }
-
-    /** The shell's pixels into target/screenshots (for the README; looked at by a person, not compared). */
-    private void screenshot(String name) {
-        pump(200);
-        org.eclipse.swt.graphics.Rectangle b = shell.getBounds();
-        org.eclipse.swt.graphics.Image image = new org.eclipse.swt.graphics.Image(display, b.width, b.height);
-        org.eclipse.swt.graphics.GC gc = new org.eclipse.swt.graphics.GC(display);
-        try {
-            gc.copyArea(image, b.x, b.y);
-            java.nio.file.Files.createDirectories(Path.of("target", "screenshots"));
-            org.eclipse.swt.graphics.ImageLoader loader = new org.eclipse.swt.graphics.ImageLoader();
-            loader.data = new org.eclipse.swt.graphics.ImageData[] { image.getImageData() };
-            loader.save(Path.of("target", "screenshots", name).toString(), SWT.IMAGE_PNG);
-        } catch (IOException e) {
-            throw new java.io.UncheckedIOException(e);
-        } finally {
-            gc.dispose();
-            image.dispose();
-        }
     }
 
     private Map<String, String> figures() {
@@ -197,43 +176,21 @@ class WalkthroughPartTest {
     }
 
     private Button button(String text) {
-        return (Button) find(shell, Button.class, b -> b.getText().equals(text));
+        return Widgets.button(shell, text);
     }
 
     private void click(Button b) {
         if (b.isEnabled()) {
-            b.notifyListeners(SWT.Selection, new org.eclipse.swt.widgets.Event());
+            Widgets.select(b);
         }
         pump(20);
     }
 
     private void pump(long millis) {
-        long end = System.currentTimeMillis() + millis;
-        while (System.currentTimeMillis() < end) {
-            if (!display.readAndDispatch()) {
-                try {
-                    Thread.sleep(5);
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                    return;
-                }
-            }
-        }
+        Widgets.pump(display, millis);
     }
 
-    @SuppressWarnings("unchecked")
-    private static <T extends Control> Control find(Composite root, Class<T> type, java.util.function.Predicate<T> test) {
-        for (Control c : root.getChildren()) {
-            if (type.isInstance(c) && test.test((T) c)) {
-                return c;
-            }
-            if (c instanceof Composite k) {
-                Control found = find(k, type, test);
-                if (found != null) {
-                    return found;
-                }
-            }
-        }
-        return null;
+    private void screenshot(String name) {
+        Widgets.screenshot(shell, name);
     }
 }
