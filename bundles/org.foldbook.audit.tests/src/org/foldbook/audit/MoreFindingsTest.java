@@ -38,6 +38,9 @@ class MoreFindingsTest {
         Finding white = of(audit(nb, "white"), AuditKind.ENERGY_AT_NYQUIST).get(0);
         assertEquals(Severity.WARNING, white.severity());
         assertEquals(0.0, white.value("dropDb"), 1.0); // white: as high at fs/2 as anywhere
+        // no filter recorded: the flat model folds white noise at the sensor up to 4·fs onto itself, flat too
+        assertEquals(0.0, white.value("modelDropDb"), 0.1);
+        assertTrue(white.message().contains("the chain does not protect the top of the band"), white.message());
         Finding avg = of(audit(nb, "averaged"), AuditKind.ENERGY_AT_NYQUIST).get(0);
         // y = (x[n] + x[n−1])/2 has |H(f)|² = cos²(πf/fs) (closed form); the floor over 0–fs/4 is its median,
         // cos²(π/8), and the top 5 % its mean over 0.475–0.5 fs (midpoint rule below)
@@ -49,6 +52,20 @@ class MoreFindingsTest {
         double expected = 10 * Math.log10(Math.pow(Math.cos(Math.PI / 8), 2) / mean);
         assertEquals(Severity.INFO, avg.severity());
         assertEquals(expected, avg.value("dropDb"), 1.5);
+    }
+
+    @Test
+    void whiteDataBehindARecordedFilterDoubtTheFilter() throws Exception {
+        SyntheticRig rig = new SyntheticRig(dir, 3_000);
+        SignalChain c = rig.chain("F", 8_000, 8, 2_000); // 8-pole Butterworth at fs/4
+        double[] w = new Random(13).doubles(65_536).map(v -> 0.1 * (v - 0.5)).toArray();
+        rig.channel("filtered", c, 8_000, 65_536, DAY, n -> w[n]);
+        Finding f = of(audit(rig.saved(), "filtered"), AuditKind.ENERGY_AT_NYQUIST).get(0);
+        assertEquals(Severity.WARNING, f.severity());
+        // the model: |H|² = 1/(1 + (f/fc)^16) is below −40 dB over 3.8–4 kHz (closed form) while 0–2 kHz is
+        // within 3 dB of flat, so the predicted drop is far above the 10 dB the policy asks
+        assertTrue(f.value("modelDropDb") > 35, "model drop " + f.value("modelDropDb"));
+        assertTrue(f.message().contains("did not act as recorded"), f.message());
     }
 
     @Test

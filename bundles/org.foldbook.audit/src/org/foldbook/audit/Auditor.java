@@ -110,7 +110,7 @@ public final class Auditor {
         double searchUpper = upper > 0 ? upper : ref != null ? ref.spectrum().rateHz() / 2 : 4 * rate;
         if (spectrum.isPresent() && rate > 0) {
             ChannelSpectrum sp = spectrum.get();
-            DataAudit.nyquist(at, sp, policy);
+            DataAudit.nyquist(at, sp, policy, protection, searchUpper);
             double ceiling = chain == null ? 0 : ChainFigures.need(chain).map(ChainFigures.Need::outOfBandLevelDbfs)
                     .orElse(chain.getOutOfBandLevelDbfs() != null ? chain.getOutOfBandLevelDbfs() : 0.0);
             int segment = (int) Math.round(sp.rateHz() / sp.binHz());

@@ -4,6 +4,7 @@ import static org.foldbook.audit.Subject.fig;
 
 import java.util.Arrays;
 
+import org.foldbook.dsp.filter.FrequencyResponse;
 import org.foldbook.model.derived.Quantities;
 
 /**
@@ -77,31 +78,77 @@ final class DataAudit {
      * Energy near Nyquist: the mean density over the top {@code nyquistBandFraction} of 0..fs/2 against the
      * broadband floor of the band (the median density over 0..fs/4). An effective low-pass ahead of the
      * digitizer pushes the top down well below the floor; a spectrum still as high there says it did not,
-     * or that content folds in there.
+     * or that content folds in there. The words say which, from the same drop predicted by the chain's
+     * modelled protection for white noise at the sensor up to {@code upperHz} (folded as it is sampled):
+     * a drop the model predicts too means the top of the band is unprotected by the chain's design (a
+     * filter's transition band, or no filter); a drop far short of the model's says the filter did not
+     * act as the notebook records.
      */
-    static void nyquist(Subject at, ChannelSpectrum sp, AuditPolicy policy) {
+    static void nyquist(Subject at, ChannelSpectrum sp, AuditPolicy policy, FrequencyResponse protection,
+            double upperHz) {
         int n = sp.bins();
         if (n < 16) {
             return;
         }
         int from = (int) Math.floor((1 - policy.nyquistBandFraction()) * (n - 1));
-        double top = 0;
-        for (int k = from; k < n; k++) {
-            top += sp.psd()[k];
+        double drop = topDrop(sp.psd(), from);
+        double[] predicted = new double[n];
+        for (int k = 0; k < n; k++) {
+            predicted[k] = foldedWhite(protection, k * sp.binHz(), sp.rateHz(), upperHz);
         }
-        top /= (n - from);
-        int quarter = n / 2;
-        double[] low = Arrays.copyOfRange(sp.psd(), 1, quarter);
-        Arrays.sort(low);
-        double floor = low[low.length / 2];
-        double drop = 10 * Math.log10(Math.max(floor, 1e-300) / Math.max(top, 1e-300));
+        double modelDrop = topDrop(predicted, from);
         Severity sev = drop < policy.nyquistExcessDb() ? Severity.WARNING : Severity.INFO;
+        String why = "";
+        if (sev == Severity.WARNING) {
+            why = " (less than " + Words.db(policy.nyquistExcessDb()) + "): "
+                    + (modelDrop >= policy.nyquistExcessDb() && drop < modelDrop - MODEL_TOLERANCE_DB
+                            ? "the chain's modelled protection predicts " + Words.db(modelDrop)
+                                    + ", so its filter did not act as recorded, or content folds in there"
+                            : "as the chain's modelled protection predicts (" + Words.db(modelDrop)
+                                    + "): the chain does not protect the top of the band (no low-pass, or its "
+                                    + "transition band lies there); read it as not alias-free");
+        }
         at.add(AuditKind.ENERGY_AT_NYQUIST, sev, String.format(java.util.Locale.ROOT,
                 "over the top %.0f %% of the band (%s–%s) the spectrum lies %s below the broadband floor of 0–%s%s",
                 100 * policy.nyquistBandFraction(), Quantities.hz(from * sp.binHz()), Quantities.hz(sp.rateHz() / 2),
-                Words.db(drop), Quantities.hz(sp.rateHz() / 4),
-                sev == Severity.WARNING ? " (less than " + Words.db(policy.nyquistExcessDb())
-                        + "): no effective low-pass was in place, or content folds in there" : ""),
-                fig("dropDb", drop, "dB"), fig("fromHz", from * sp.binHz(), "Hz"));
+                Words.db(drop), Quantities.hz(sp.rateHz() / 4), why),
+                fig("dropDb", drop, "dB"), fig("modelDropDb", modelDrop, "dB"), fig("fromHz", from * sp.binHz(), "Hz"));
+    }
+
+    /** How far the data may fall short of the model's drop before the filter is doubted (dB, our choice). */
+    static final double MODEL_TOLERANCE_DB = 3.0;
+
+    /** The median of {@code psd[1 .. n/2)} over the mean of {@code psd[from .. n)}, in dB. */
+    private static double topDrop(double[] psd, int from) {
+        int n = psd.length;
+        double top = 0;
+        for (int k = from; k < n; k++) {
+            top += psd[k];
+        }
+        top /= (n - from);
+        double[] low = Arrays.copyOfRange(psd, 1, n / 2);
+        Arrays.sort(low);
+        double floor = low[low.length / 2];
+        return 10 * Math.log10(Math.max(floor, 1e-300) / Math.max(top, 1e-300));
+    }
+
+    /**
+     * Density at {@code f} (0..fs/2) after sampling of white noise at the sensor up to {@code upperHz} through
+     * {@code h}: Σ|H(f')|² over every f' = |f − k·fs| ≤ upper (the fold of sampling, Oppenheim and Schafer ch. 4).
+     */
+    static double foldedWhite(FrequencyResponse h, double f, double fs, double upperHz) {
+        double upper = upperHz > fs / 2 ? upperHz : fs / 2;
+        double sum = 0;
+        for (int m = 0; m * fs - f <= upper; m++) {
+            if (m > 0 && f > 0 && 2 * f < fs) { // at 0 and fs/2 the two image sets are one
+                double g = h.magnitude(m * fs - f);
+                sum += g * g;
+            }
+            if (m * fs + f <= upper) {
+                double g = h.magnitude(m * fs + f);
+                sum += g * g;
+            }
+        }
+        return sum;
     }
 }

@@ -78,6 +78,9 @@ public final class GearboxDemo {
     /** Dynamic range the scenario's data sheet gives for the 24-bit digitizer (dB, full scale to noise). */
     static final double DAQ_DYNAMIC_RANGE_DB = 110.0;
 
+    /** The conditioners' analog noise over their band, as a full-scale fraction (−50 dBFS rms). */
+    static final double ANALOG_NOISE_RMS = 0.00316;
+
     private GearboxDemo() {
     }
 
@@ -302,8 +305,27 @@ public final class GearboxDemo {
         return tones.toArray(Tone[]::new);
     }
 
-    private static double noiseOf(SignalChain chain) {
-        return "CH-CAM".equals(chain.getId()) ? 0.01 : 0.002;
+    /**
+     * The scenario's noise: a camera's read noise is white per frame; an electrical chain has its
+     * conditioner's analog noise (white to the amplifier's upper edge, else to twice the rate) that passes
+     * the chain's filters and folds as it is sampled, and the digitizer's own white floor from its stated
+     * dynamic range (full-scale sine to noise: rms = 10^(−DR/20)/√2).
+     */
+    static SyntheticTones.Noise noiseOf(SignalChain chain) {
+        if ("CH-CAM".equals(chain.getId())) {
+            return SyntheticTones.Noise.white(0.01);
+        }
+        double band = 2 * ChainFigures.samplingRateHz(chain);
+        double dynamicRangeDb = 144.0;
+        for (Stage stage : chain.getStages()) {
+            if (stage.getDevice() instanceof Amplifier amplifier && amplifier.getBandwidthHighHz() != null) {
+                band = amplifier.getBandwidthHighHz();
+            }
+            if (stage.getDevice() instanceof Digitizer digitizer && digitizer.getDynamicRangeDb() != null) {
+                dynamicRangeDb = digitizer.getDynamicRangeDb();
+            }
+        }
+        return new SyntheticTones.Noise(ANALOG_NOISE_RMS, band, Math.pow(10, -dynamicRangeDb / 20) / Math.sqrt(2));
     }
 
     private static long seedOf(SignalChain chain) {
