@@ -17,10 +17,11 @@ import org.foldbook.dsp.Check;
  *     data sheet's pass/stop edges times the new rate fs and its attenuation — a design that meets the
  *     mask, which is all a data sheet states;</li>
  * </ol>
- * then sampled bare ({@link BareSampler}'s kernel) at t_m = m·down/up source samples from the 2·fs0
- * series, where the kernel is flat to far beyond the source band (0.49·fs0 is 0.245 of its rate). Step 2
- * is linear and time-invariant like the interpolation, so it is folded into the sampler's phase table
- * (taps = FIR length + 31): only the kept instants are computed.
+ * then sampled bare at t_m = m·down/up source samples from the 2·fs0 series by the 16-tap kernel made for
+ * it ({@link BareSampler#forDoubledSeries}: flat to 0.245 of the series' rate, i.e. 0.49·fs0, images of
+ * anything below 0.255 of it rejected by ≥ 118 dB). Step 2 is linear and time-invariant like the
+ * interpolation, so it is folded into the sampler's phase table (taps = FIR length + 15): only the kept
+ * instants are computed.
  *
  * <p>With {@link AnalogStage#ALREADY_APPLIED} the input is already {@link ExactChainFilter#apply}'s 2·fs0
  * series (a sweep filters the recording once for all rates), so {@link #outputLength} counts 2·fs0 inputs.
@@ -96,9 +97,9 @@ public final class ModelledChannelResampler implements RandomAccessResampler {
      * y = Σ_i v[b + i0 + i]·G_f[i], G_f[i] = Σ_j c[j]·h(i0 + i + j − C − f); null for integer picking.
      */
     private static PolyphaseKernel combinedKernel(RateRatio ratio, double[] c) {
-        int w = BareSampler.DEFAULT_HALF_WIDTH;
-        KaiserSinc h = new KaiserSinc(w, BareSampler.DEFAULT_BETA);
-        PolyphaseKernel bare = BareSampler.of(ratio).kernel();          // null for up = 1
+        int w = BareSampler.DOUBLED_HALF_WIDTH;
+        KaiserSinc h = new KaiserSinc(w, BareSampler.DOUBLED_BETA);
+        PolyphaseKernel bare = BareSampler.forDoubledSeries(ratio).kernel();   // null for up = 1
         if (c.length == 1) {
             return bare;                                                 // nothing to fold in
         }
@@ -154,7 +155,7 @@ public final class ModelledChannelResampler implements RandomAccessResampler {
         return channel;
     }
 
-    /** Taps per output at 2·fs0: 32 for the bare kernel plus the digitizer FIR's length minus one. */
+    /** Taps per output at 2·fs0: 16 for the bare kernel plus the digitizer FIR's length minus one. */
     public int tapsPerOutput() {
         return kernel == null ? 1 : kernel.taps();
     }

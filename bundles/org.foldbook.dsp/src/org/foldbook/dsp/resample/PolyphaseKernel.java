@@ -138,6 +138,8 @@ final class PolyphaseKernel {
         }
         if (taps == 32) {
             run32(buf, (int) first, p, m0, out, outOff, count);
+        } else if (taps == SixteenTapLoops.TAPS) {
+            SixteenTapLoops.run(table, up, down, buf, (int) first, p, m0, out, outOff, count);
         } else {
             runAny(buf, (int) first, p, out, outOff, count);
         }
