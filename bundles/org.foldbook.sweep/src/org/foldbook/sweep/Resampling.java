@@ -78,9 +78,10 @@ public interface Resampling {
 
     /**
      * Mode 1: a digitizer with no anti-alias filter. The recording is first brought to 2·fs0 by the exact
-     * filter of an empty chain ({@link ExactChainFilter}: flat to 0.49·fs0), then evaluated at the new instants
-     * by the windowed sinc ({@link BareSampler}), which there works far inside its flat band: every component
-     * up to 0.49·fs0 arrives within −100 dB, and the interpolator adds no images of its own.
+     * filter of an empty chain ({@link ExactChainFilter}: flat to 0.49·fs0, nothing from 0.51·fs0 to 1.49·fs0),
+     * then evaluated at the new instants by the 16-tap windowed sinc made for such a series
+     * ({@link BareSampler#forDoubledSeries}): every component up to 0.49·fs0 arrives within −100 dB, and the
+     * interpolator adds no images of its own.
      */
     static Resampling bare() {
         return new ModelledFilter(ModelledChannel.none(), "bare");

@@ -12,8 +12,10 @@
  * <li>Mode 2, {@link org.foldbook.dsp.resample.ModelledChannelResampler} over a
  *     {@link org.foldbook.dsp.resample.ModelledChannel}: the analog filters and a camera exposure with
  *     their true response ({@link org.foldbook.dsp.resample.ExactChainFilter}: frequency domain, overlap-save,
- *     output at 2·fs0, within 0.1 dB above −120 dB over 0..0.49·fs0), a digitizer's digital filter, then the
- *     mode 1 kernel on the 2·fs0 series. What the source rate cannot honour comes as
+ *     output at 2·fs0, within 0.1 dB above −120 dB over 0..0.49·fs0), a digitizer's digital filter, then a
+ *     16-tap Kaiser sinc on the 2·fs0 series ({@link org.foldbook.dsp.resample.BareSampler#forDoubledSeries}:
+ *     W = 8, β = 12.2, enough there because the series holds nothing above 0.255 of its rate). With an empty
+ *     chain this is the exact bare mode: every component up to 0.49·fs0 within −100 dB. What the source rate cannot honour comes as
  *     {@link org.foldbook.dsp.resample.SimulationWarning}s.</li>
  * <li>Mode 3, {@link org.foldbook.dsp.resample.IdealDecimator}: multi-stage Kaiser polyphase, pass band
  *     to 0.45·fs within 0.001 dB, ≥ 100 dB from fs/2, zero delay.</li>
@@ -32,12 +34,12 @@
  * stays a few blocks whatever the recording's length. Bad arguments raise IllegalArgumentException
  * naming the parameter and value.
  *
- * <p>Cost, multiply-adds: mode 1 32 per output; resample_poly ≈ 20 per input sample at any ratio;
- * mode 3 about 27 per input sample for strong decimation, ≈ 133 per input sample for ratios in [1/2, 1)
- * (one sharp stage: a 5 % transition at ≥ 100 dB is that long); mode 2 the FIR's length + 31 per
+ * <p>Cost, multiply-adds: mode 1 32 per output (16 on the 2·fs0 series); resample_poly ≈ 20 per input
+ * sample at any ratio; mode 3 about 27 per input sample for strong decimation, ≈ 133 per input sample for ratios in [1/2, 1)
+ * (one sharp stage: a 5 % transition at ≥ 100 dB is that long); mode 2 the FIR's length + 15 per
  * output at 2·fs0, plus the exact filter's overlap-save (two FFTs of about four kernel lengths per block,
- * once per recording). The inner loops are plain Java (no incubator vector API): fixed 32-tap loops, several
- * independent sums, and for mode 1 four outputs of one phase per pass so each coefficient is loaded
- * once for four outputs.
+ * once per recording). The inner loops are plain Java (no incubator vector API): fixed 32- and 16-tap loops
+ * ({@code SixteenTapLoops}), several independent sums, and four outputs of one phase per pass so each
+ * coefficient is loaded once for four outputs.
  */
 package org.foldbook.dsp.resample;
