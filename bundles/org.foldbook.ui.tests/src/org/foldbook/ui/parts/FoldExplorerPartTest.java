@@ -102,7 +102,7 @@ class FoldExplorerPartTest {
             Channel housing = document.notebook().getExperiments().get(0).getChannels().get(0);
             assertEquals("housing Z", housing.getName());
             current.select(housing);
-            waitFor(display, () -> part.job() == null, "reading the peaks", 120_000_000_000L);
+            waitFor(display, () -> !part.reading(), "reading the peaks", 120_000_000_000L);
             List<Text> fields = findAll(shell, Text.class);
             assertEquals("25600.0", fields.get(1).getText(), "the channel's rate (GearboxDemo: 25.6 kS/s)");
             Table table = find(shell, Table.class);

@@ -146,7 +146,7 @@ class RecordingPartTest {
         Path wav = folder.resolve("data/vibration-run1.wav");
         Files.move(wav, folder.resolve("elsewhere.wav"));
         current.select(channel("bearing Z"));
-        waitFor(() -> part.job() == null, "reading bearing Z");
+        waitFor(() -> !part.reading(), "reading bearing Z");
         assertNull(part.presenter.overview());
         assertTrue(part.message.getText().contains(wav.toString()), part.message.getText());
         assertTrue(part.message.getText().contains("missing"), part.message.getText());
@@ -156,7 +156,7 @@ class RecordingPartTest {
         b[b.length - 2] ^= 4;
         Files.write(wav, b);
         part.reread.notifyListeners(SWT.Selection, new Event());
-        waitFor(() -> part.job() == null, "reading the changed file");
+        waitFor(() -> !part.reading(), "reading the changed file");
         assertTrue(part.message.getText().startsWith(wav.toString()), part.message.getText());
         assertTrue(part.message.getText().contains("changed since it was logged"), part.message.getText());
         assertEquals(0, part.peaks.getItemCount());
@@ -182,7 +182,7 @@ class RecordingPartTest {
         waitFor(() -> part.progress.getSelection() > 0, "the read to start");
         assertTrue(part.cancel.getEnabled());
         part.cancel.notifyListeners(SWT.Selection, new Event());
-        waitFor(() -> part.job() == null, "the cancelled read to stop");
+        waitFor(() -> !part.reading(), "the cancelled read to stop");
         assertNull(part.presenter.overview());
         assertTrue(part.message.getText().contains("cancelled"), part.message.getText());
         assertFalse(part.cancel.getEnabled());

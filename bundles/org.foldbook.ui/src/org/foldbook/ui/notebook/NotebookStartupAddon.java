@@ -8,12 +8,15 @@ import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.osgi.service.datalocation.Location;
 
 import org.foldbook.dsp.fft.RealFft;
+import org.foldbook.ui.preferences.SpectrumPreferences;
+import org.foldbook.ui.recording.RecordingSession;
 
 import jakarta.annotation.PostConstruct;
 
 /**
  * Start-up (an addon of Application.e4xmi, so it runs before any part is drawn): puts the
- * {@link CurrentNotebook} into the application context and opens a notebook in the background —
+ * {@link CurrentNotebook}, the {@link SpectrumPreferences} and the shared {@link RecordingSession} into the
+ * application context and opens a notebook in the background —
  * the {@code .foldbook} file named on the command line, or else the demo notebook in
  * {@code <workspace>/demo/}, written there on first start.
  */
@@ -28,6 +31,10 @@ public class NotebookStartupAddon {
         RealFft.configureThreads(1);
         CurrentNotebook current = new CurrentNotebook();
         application.getContext().set(CurrentNotebook.class, current);
+        // the spectrum preferences, and the one read of the selected channel the parts share
+        SpectrumPreferences preferences = SpectrumPreferences.workbench();
+        application.getContext().set(SpectrumPreferences.class, preferences);
+        application.getContext().set(RecordingSession.class, new RecordingSession(preferences));
         Path requested = StartupArguments.notebookPath(Platform.getApplicationArgs());
         if (requested != null) {
             NotebookOpening.open(requested, current, sync);

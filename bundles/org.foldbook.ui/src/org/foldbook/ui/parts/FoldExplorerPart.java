@@ -23,9 +23,10 @@ import org.foldbook.model.derived.ChainModel;
 import org.foldbook.ui.chart.PlotView;
 import org.foldbook.ui.export.ExportMenu;
 import org.foldbook.ui.notebook.CurrentNotebook;
-import org.foldbook.ui.recording.ReadRecordingJob;
+import org.foldbook.ui.preferences.SpectrumPreferences;
 import org.foldbook.ui.recording.RecordingOverview;
 import org.foldbook.ui.recording.RecordingPresenter;
+import org.foldbook.ui.recording.RecordingSession;
 
 import jakarta.annotation.PostConstruct;
 import jakarta.annotation.PreDestroy;
@@ -66,7 +67,17 @@ public class FoldExplorerPart {
     private Channel channel;
     private ChainModel chain;
     private double channelRate = Double.NaN;
-    private ReadRecordingJob job;
+    /** The read of the selected channel, shared with the Recording view. */
+    @Inject
+    @Optional
+    RecordingSession session;
+    @Inject
+    @Optional
+    SpectrumPreferences preferences;
+    private RecordingSession ownSession;
+    /** The phase of the session's state shown last (UI thread). */
+    private RecordingSession.Phase shown;
+    private final Consumer<RecordingSession.State> onState = s -> ui(() -> apply(s));
 
     @PostConstruct
     public void createControls(Composite parent) {
@@ -120,6 +131,10 @@ public class FoldExplorerPart {
         tonesField.addModifyListener(e -> refresh());
         rateField.addModifyListener(e -> refresh());
         refresh();
+        if (session == null) {
+            session = ownSession = new RecordingSession(preferences);
+        }
+        session.addListener(onState);
         if (current != null) {
             current.addSelectionListener(onSelection);
             follow(current.selection());
@@ -132,30 +147,40 @@ public class FoldExplorerPart {
         if (next == null || next == channel) {
             return;
         }
-        if (job != null) {
-            job.cancel();
-        }
         channel = next;
         chain = next.getChain() == null ? null : ChainModel.of(next.getChain());
         source.setText("Reading the peaks of channel '" + next.getName() + "' …");
-        ReadRecordingJob read = new ReadRecordingJob(next, perMille -> { },
-                overview -> ui(() -> showPeaks(next, overview)),
-                problem -> ui(() -> showProblem(next, problem)),
-                () -> ui(() -> showProblem(next, "reading was cancelled")));
-        job = read;
-        read.schedule();
+        apply(session.request(next));
     }
 
-    /** The read of the selected channel's peaks, or null. */
-    ReadRecordingJob job() {
-        return job;
+    /** The shared session's news (any thread): a finished read gives the tones, on the UI thread. */
+    private void apply(RecordingSession.State s) {
+        if (s.channel() != channel) {
+            return;
+        }
+        shown = s.phase();
+        switch (s.phase()) {
+            case READING -> {
+            }
+            case DONE -> showPeaks(s.channel(), s.overview());
+            case FAILED -> showProblem(s.channel(), s.problem());
+            case CANCELLED -> showProblem(s.channel(), "reading was cancelled");
+        }
+    }
+
+    /** True until the read of the channel whose peaks this part takes has ended and its outcome is shown. */
+    boolean reading() {
+        return channel != null && shown == RecordingSession.Phase.READING;
+    }
+
+    RecordingSession session() {
+        return session;
     }
 
     private void showPeaks(Channel of, RecordingOverview overview) {
         if (of != channel) {
             return;
         }
-        job = null;
         List<SpectralPeak> peaks = new ArrayList<>(overview.peaks());
         peaks.sort((a, b) -> Double.compare(b.levelDb(), a.levelDb()));
         StringBuilder tones = new StringBuilder();
@@ -176,7 +201,6 @@ public class FoldExplorerPart {
         if (of != channel) {
             return;
         }
-        job = null;
         source.setText("No peaks from channel '" + of.getName() + "': " + problem);
         source.getParent().layout();
     }
@@ -194,8 +218,9 @@ public class FoldExplorerPart {
 
     @PreDestroy
     public void dispose() {
-        if (job != null) {
-            job.cancel();
+        session.removeListener(onState);
+        if (ownSession != null) {
+            ownSession.dispose();
         }
         if (current != null) {
             current.removeSelectionListener(onSelection);

@@ -16,6 +16,7 @@ import org.foldbook.channel.ChannelDataException;
 import org.foldbook.channel.ChannelReader;
 import org.foldbook.channel.ReadProgress;
 import org.foldbook.model.Channel;
+import org.foldbook.ui.preferences.SpectrumSettingsValues;
 
 /**
  * Reads a channel's recording in the background ({@link RecordingAnalysis}), reporting progress in
@@ -24,16 +25,18 @@ import org.foldbook.model.Channel;
  */
 public final class ReadRecordingJob extends Job {
     private final Channel channel;
+    private final SpectrumSettingsValues settings;
     private final Consumer<RecordingOverview> done;
     private final Consumer<String> failed;
     private final Runnable cancelled;
     private final LongConsumer perMille;
     private final AtomicBoolean ran = new AtomicBoolean();
 
-    public ReadRecordingJob(Channel channel, LongConsumer perMille, Consumer<RecordingOverview> done,
+    public ReadRecordingJob(Channel channel, SpectrumSettingsValues settings, LongConsumer perMille, Consumer<RecordingOverview> done,
             Consumer<String> failed, Runnable cancelled) {
         super("Reading the recording of channel '" + channel.getName() + "'");
         this.channel = channel;
+        this.settings = settings;
         this.perMille = perMille;
         this.done = done;
         this.failed = failed;
@@ -72,7 +75,7 @@ public final class ReadRecordingJob extends Job {
             }
         };
         try {
-            done.accept(RecordingAnalysis.run(channel, ChannelReader.ReadRequest.STRICT, progress));
+            done.accept(RecordingAnalysis.run(channel, ChannelReader.ReadRequest.STRICT, settings, progress));
             return Status.OK_STATUS;
         } catch (CancellationException e) {
             cancelled.run();

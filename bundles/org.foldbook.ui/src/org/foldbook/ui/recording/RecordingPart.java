@@ -23,6 +23,7 @@ import org.foldbook.model.Channel;
 import org.foldbook.ui.chart.PlotView;
 import org.foldbook.ui.export.ExportMenu;
 import org.foldbook.ui.notebook.CurrentNotebook;
+import org.foldbook.ui.preferences.SpectrumPreferences;
 
 import jakarta.annotation.PostConstruct;
 import jakarta.annotation.PreDestroy;
@@ -31,7 +32,8 @@ import jakarta.inject.Inject;
 /**
  * The recording view: the channel selected in the Notebook part, read from its file in a background job —
  * a min/max overview of the whole recording over time and its Welch spectrum in the sensor's units, peaks
- * marked and listed, a readout under the mouse. Only draws; {@link RecordingPresenter} decides what.
+ * marked and listed, a readout under the mouse. The read is the {@link RecordingSession}'s, shared with the
+ * Fold explorer; peaks follow the spectrum preferences. Only draws; {@link RecordingPresenter} decides what.
  */
 public class RecordingPart {
     @Inject
@@ -54,8 +56,18 @@ public class RecordingPart {
     PlotView spectrum;
     Table peaks;
     Label cursor;
+    @Inject
+    @Optional
+    RecordingSession session;
+    @Inject
+    @Optional
+    SpectrumPreferences preferences;
+    /** The session made here when none was shared (a part on its own, in tests). */
+    private RecordingSession ownSession;
+    private final Consumer<RecordingSession.State> onState = s -> ui(() -> apply(s));
+    /** The phase of the session's state drawn last (UI thread). */
+    private RecordingSession.Phase shown;
     private Composite charts;
-    private ReadRecordingJob job;
     /** Peaks labelled on the chart (the strongest); the table lists them all. */
     static final int LABELLED_PEAKS = 6;
 
@@ -121,10 +133,18 @@ public class RecordingPart {
             presenter.setLogFrequency(logAxis.getSelection());
             render();
         });
-        reread.addListener(SWT.Selection, e -> follow(presenter.channel()));
+        reread.addListener(SWT.Selection, e -> {
+            if (presenter.channel() != null) {
+                apply(session.reread(presenter.channel()));
+            }
+        });
         cancel.addListener(SWT.Selection, e -> cancelReading());
         spectrum.onCursor((x, y) -> cursor.setText(presenter.cursorText(x)));
 
+        if (session == null) {
+            session = ownSession = new RecordingSession(preferences);
+        }
+        session.addListener(onState);
         if (current != null) {
             current.addSelectionListener(onSelection);
             follow(current.selection());
@@ -139,49 +159,56 @@ public class RecordingPart {
         if (channel == null && presenter.channel() != null && selection != null) {
             return; // a rig or chain selected: keep showing the last channel
         }
-        cancelReading();
-        presenter.follow(channel);
-        render();
-        if (channel != null) {
-            start(channel);
+        if (channel != presenter.channel()) {
+            presenter.follow(channel);
+            render();
+        }
+        if (channel != null) {   // a read of it running or done is reused, a failed one tried again
+            apply(session.request(channel));
         }
     }
 
-    private void start(Channel channel) {
-        ReadRecordingJob next = new ReadRecordingJob(channel,
-                perMille -> ui(() -> progress.setSelection((int) perMille)),
-                overview -> finished(channel, () -> presenter.showOverview(overview)),
-                problem -> finished(channel, () -> presenter.showProblem(problem)),
-                () -> finished(channel, () -> presenter.showProblem("Reading channel '" + channel.getName()
-                        + "' was cancelled; press Read again to read it.")));
-        job = next;
-        progress.setSelection(0);
-        cancel.setEnabled(true);
-        next.schedule();
-    }
-
-    /** Applies a job's outcome on the UI thread, unless another channel was selected meanwhile. */
-    private void finished(Channel channel, Runnable apply) {
-        ui(() -> {
-            if (presenter.channel() == channel) {
-                apply.run();
-                job = null;
+    /** The session's news about the channel shown (its own thread's or ours): drawn on the UI thread. */
+    private void apply(RecordingSession.State s) {
+        if (header.isDisposed() || s.channel() != presenter.channel()) {
+            return;
+        }
+        shown = s.phase();
+        switch (s.phase()) {
+            case READING -> {
+                progress.setSelection((int) s.perMille());
+                cancel.setEnabled(true);
+                if (s.perMille() == 0) {
+                    presenter.follow(s.channel());   // a new read (or other preferences): say so while it reads
+                    render();
+                }
+            }
+            case DONE -> {
                 cancel.setEnabled(false);
+                presenter.showOverview(s.overview());
                 render();
             }
-        });
+            case FAILED, CANCELLED -> {
+                cancel.setEnabled(false);
+                presenter.showProblem(s.problem());
+                render();
+            }
+        }
     }
 
     /** Asks the running read to stop (its cancellation shows in the part). */
     public void cancelReading() {
-        if (job != null) {
-            job.cancel();
-        }
+        session.cancel();
     }
 
-    /** The running read, or null. */
-    ReadRecordingJob job() {
-        return job;
+    /** True until the read of the channel shown has ended and its outcome is drawn. */
+    boolean reading() {
+        return presenter.channel() != null && shown == RecordingSession.Phase.READING;
+    }
+
+    /** The session this view shows. */
+    RecordingSession session() {
+        return session;
     }
 
     private void ui(Runnable r) {
@@ -263,7 +290,10 @@ public class RecordingPart {
 
     @PreDestroy
     public void dispose() {
-        cancelReading();
+        session.removeListener(onState);
+        if (ownSession != null) {
+            ownSession.dispose();
+        }
         if (current != null) {
             current.removeSelectionListener(onSelection);
         }

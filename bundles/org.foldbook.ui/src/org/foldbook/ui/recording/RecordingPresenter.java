@@ -201,8 +201,9 @@ public final class RecordingPresenter {
     public String details() {
         RecordingOverview o = overview;
         return String.format(Locale.ROOT, "%s%nSHA-256 %s%nWelch: %d segments of %d samples (%.4g Hz lines), periodic"
-                + " Hann, half overlap%nScale: %s", o.file(), o.sha256(), o.spectrum().segments(),
-                o.spectrum().transformLength(), o.spectrum().binWidth(), o.scale().how());
+                + " Hann, half overlap%nPeaks: %s (Window ▸ Preferences…)%nScale: %s", o.file(), o.sha256(),
+                o.spectrum().segments(), o.spectrum().transformLength(), o.spectrum().binWidth(),
+                o.settings().describe(), o.scale().how());
     }
 
     /** Labels for {@link #peakPoints()}: "906.5 Hz" for the {@code count} strongest, null for the rest. */

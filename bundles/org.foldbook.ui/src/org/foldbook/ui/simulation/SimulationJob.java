@@ -48,6 +48,10 @@ final class SimulationJob extends Job {
         return sweep;
     }
 
+    SimulationPlanner.Request request() {
+        return request;
+    }
+
     /** {@code sweep} false: only read the recording and prepare the what-if rate (for a kept run). */
     SimulationJob(Channel channel, SimulationPlanner.Request request, boolean sweep,
             java.util.function.BiConsumer<SimulationJob, Outcome> done) {

@@ -28,10 +28,15 @@ import org.foldbook.model.NotebookPackage;
 import org.foldbook.model.SimulationRun;
 import org.foldbook.model.SweepMode;
 import org.foldbook.model.derived.Quantities;
+import org.foldbook.sweep.PeakThreshold;
 import org.foldbook.sweep.SweepResult;
 import org.foldbook.ui.export.ExportMenu;
 import org.foldbook.ui.notebook.CurrentNotebook;
 import org.foldbook.ui.notebook.NotebookDocument;
+import org.foldbook.ui.preferences.SpectrumPreferences;
+import org.foldbook.ui.preferences.SpectrumSettingsValues;
+
+import org.eclipse.e4.core.di.annotations.Optional;
 
 import jakarta.annotation.PostConstruct;
 import jakarta.annotation.PreDestroy;
@@ -49,6 +54,9 @@ public class SimulationPart {
 
     @Inject
     CurrentNotebook current;
+    @Inject
+    @Optional
+    SpectrumPreferences preferences;
 
     private NotebookDocument document;
     private Channel channel;
@@ -68,6 +76,7 @@ public class SimulationPart {
     private Text summary;
     private WhatIfPane whatIfPane;
     private final CommandStackListener stackListener = e -> refreshPlan();
+    private final Consumer<SpectrumSettingsValues> preferencesListener = v -> preferencesChanged();
     private final Consumer<Object> selectionListener = this::follow;
     // the Notebook part may select a channel while the open is announced: keep what is selected then
     private final Consumer<CurrentNotebook> notebookListener = c -> show(c.document(),
@@ -137,6 +146,9 @@ public class SimulationPart {
 
         split.setWeights(50, 50);
 
+        if (preferences != null) {
+            preferences.addListener(preferencesListener);
+        }
         if (current != null) {
             current.addSelectionListener(selectionListener);
             current.addListener(notebookListener);
@@ -217,7 +229,10 @@ public class SimulationPart {
             SimulationArchive.Kept k = SimulationArchive.load(kept.get());
             showResult(k.result());
             String stale = SimulationArchive.staleness(kept.get()).map(w -> " STALE: " + w + "; run it again.").orElse("");
-            status.setText("Kept run of " + k.finishedOn() + "." + stale);
+            String other = SimulationPlanner.thresholdOf(k.setupSignature()).equals(threshold().toString()) ? ""
+                    : " Made with other peak settings (" + k.result().peakRule() + "); the preferences now: "
+                            + threshold().describe() + ". Run sweep to apply them.";
+            status.setText("Kept run of " + k.finishedOn() + "." + stale + other);
             schedule(new SimulationJob(channel, request(), false, this::finished));
         } catch (ChannelDataException e) {
             status.setText(e.getMessage());
@@ -225,7 +240,24 @@ public class SimulationPart {
     }
 
     private SimulationPlanner.Request request() {
-        return new SimulationPlanner.Request(selectedMode(), plan.rateList());
+        return new SimulationPlanner.Request(selectedMode(), plan.rateList(), threshold());
+    }
+
+    /** The peak rule of the preferences (Window ▸ Preferences…); the sweep's default without them. */
+    private PeakThreshold threshold() {
+        return preferences == null ? PeakThreshold.DEFAULT : preferences.values().threshold();
+    }
+
+    /**
+     * Other preferences: a shown run was made with the old ones, which the status says (Run sweep applies
+     * them); the what-if rate is prepared again with the new rule. A running sweep finishes with the old.
+     */
+    private void preferencesChanged() {
+        if (status.isDisposed() || channel == null || (job != null && job.sweeps()
+                && job.getState() != org.eclipse.core.runtime.jobs.Job.NONE)) {
+            return;
+        }
+        showKept();
     }
 
     private void start() {
@@ -271,10 +303,12 @@ public class SimulationPart {
             if (o.result() != null) {
                 keep(o.run());
                 showResult(o.result());
-                status.setText(String.format(Locale.ROOT, "Done: %d rates from %s to %s, %d source peaks. Kept in %s.",
+                String other = from.request().threshold().equals(threshold()) ? ""
+                        : " Made with the peak settings before they changed; Run sweep to apply the new ones.";
+                status.setText(String.format(Locale.ROOT, "Done: %d rates from %s to %s, %d source peaks. Kept in %s.%s",
                         o.result().rates().size(), Quantities.rate(o.result().rates().get(0).step().effectiveRate()),
                         Quantities.rate(o.result().rates().get(o.result().rates().size() - 1).step().effectiveRate()),
-                        o.result().sources().size(), o.run().getPath()));
+                        o.result().sources().size(), o.run().getPath(), other));
             }
         });
     }
@@ -356,6 +390,9 @@ public class SimulationPart {
             job.cancel();
         }
         whatIfPane.dispose();
+        if (preferences != null) {
+            preferences.removeListener(preferencesListener);
+        }
         if (current != null) {
             current.removeSelectionListener(selectionListener);
             current.removeListener(notebookListener);

@@ -1,5 +1,8 @@
 package org.foldbook.ui.simulation;
 
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
 import org.eclipse.emf.common.command.Command;
 import org.eclipse.emf.common.command.CompoundCommand;
 import org.eclipse.emf.ecore.EStructuralFeature;
@@ -15,6 +18,7 @@ import org.foldbook.model.RateSpacing;
 import org.foldbook.model.SignalChain;
 import org.foldbook.model.SweepMode;
 import org.foldbook.model.SweepPlan;
+import org.foldbook.sweep.PeakThreshold;
 import org.foldbook.sweep.RateLadder;
 
 /**
@@ -36,15 +40,37 @@ final class SimulationPlanner {
         return MODE_NAMES[mode.getValue()];
     }
 
-    /** What to run: the mode, and a list of rates replacing the plan's ladder (null: the plan's). */
-    record Request(SweepMode mode, double[] rateList) {
+    /**
+     * What to run: the mode, a list of rates replacing the plan's ladder (null: the plan's), and the peak rule
+     * of the workbench's preferences (null: the sweep's default). With the default rule the set-up is the
+     * command line's {@code sweep --notebook} exactly.
+     */
+    record Request(SweepMode mode, double[] rateList, PeakThreshold threshold) {
         SimulationSetup setup(Channel channel, double sourceRate) {
             SimulationSetup s = ChannelSimulation.setup(channel, mode, sourceRate);
             if (rateList != null) {
                 s = s.withLadder(RateLadder.ofRates(sourceRate, rateList, ChannelSimulation.MAX_DENOMINATOR));
             }
+            if (threshold != null && !threshold.equals(s.settings().threshold())) {
+                s = s.withSettings(s.settings().withThreshold(threshold));
+            }
             return s;
         }
+    }
+
+    private static final Pattern THRESHOLD = Pattern.compile("PeakThreshold\\[[^\\]]*\\]");
+
+    /**
+     * The peak rule a kept run was made with, from its set-up signature: the one it names when the rule was
+     * replaced ({@link SimulationSetup#withSettings}), else the sweep's default (the notebook's set-up keeps it).
+     */
+    static String thresholdOf(String setupSignature) {
+        Matcher m = THRESHOLD.matcher(setupSignature == null ? "" : setupSignature);
+        String found = null;
+        while (m.find()) {
+            found = m.group();   // the last replacement counts
+        }
+        return found != null ? found : PeakThreshold.DEFAULT.toString();
     }
 
     /** Parses a list of rates typed by a person (S/s). */
