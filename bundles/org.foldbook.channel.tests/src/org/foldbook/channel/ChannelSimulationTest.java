@@ -12,7 +12,7 @@ import org.foldbook.model.Channel;
 import org.foldbook.model.Notebook;
 import org.foldbook.model.NotebookFactory;
 import org.foldbook.model.RateSpacing;
-import org.foldbook.model.SweepMode;
+import org.foldbook.sweep.SimulationMode;
 import org.foldbook.model.SweepPlan;
 import org.foldbook.sweep.RateResult;
 import org.foldbook.sweep.SweepEngine;
@@ -41,7 +41,7 @@ class ChannelSimulationTest {
         Notebook nb = TestNotebooks.write(dir);
         Channel c = TestNotebooks.channel(nb, 0);
         c.setSweepPlan(plan(8000, 2000, 4));
-        SimulationSetup s = ChannelSimulation.setup(c, SweepMode.BARE_SAMPLING, TestNotebooks.RATE);
+        SimulationSetup s = ChannelSimulation.setup(c, SimulationMode.BARE, TestNotebooks.RATE);
         assertEquals(4, s.ladder().size());
         // linear 8000, 6000, 4000, 2000 S/s: exact ratios of 8000
         double[] want = {8000, 6000, 4000, 2000};
@@ -50,7 +50,7 @@ class ChannelSimulationTest {
         }
         c.getSweepPlan().setMinRateHz(9000);
         assertThrows(IllegalArgumentException.class,
-                () -> ChannelSimulation.setup(c, SweepMode.BARE_SAMPLING, TestNotebooks.RATE));
+                () -> ChannelSimulation.setup(c, SimulationMode.BARE, TestNotebooks.RATE));
     }
 
     @Test
@@ -59,7 +59,7 @@ class ChannelSimulationTest {
         Channel c = TestNotebooks.channel(nb, 1); // 1250 Hz
         c.setSweepPlan(plan(8000, 2000, 4));
         ChannelData d = ChannelReader.read(c, ChannelReader.ReadRequest.STRICT, ReadProgress.NONE);
-        SimulationSetup s = ChannelSimulation.setup(c, SweepMode.BARE_SAMPLING, d.rateHz());
+        SimulationSetup s = ChannelSimulation.setup(c, SimulationMode.BARE, d.rateHz());
         try (SweepEngine engine = new SweepEngine(2)) {
             SweepResult r = ChannelSimulation.run(d, s, engine, SweepProgress.NONE);
             RateResult at2000 = r.rates().get(3);
@@ -76,7 +76,7 @@ class ChannelSimulationTest {
     void filteredModeTakesTheThroughChainAndSaysWhatItSkips() throws IOException {
         Notebook nb = TestNotebooks.write(dir);
         Channel c = TestNotebooks.channel(nb, 0);
-        SimulationSetup own = ChannelSimulation.setup(c, SweepMode.FILTERED, TestNotebooks.RATE);
+        SimulationSetup own = ChannelSimulation.setup(c, SimulationMode.MODELLED, TestNotebooks.RATE);
         // the recording already passed the channel's own low-pass: it is not applied twice
         assertTrue(own.notes().stream().anyMatch(n -> n.contains("not applied again")), own.notes().toString());
         assertTrue(own.signature().contains("Butterworth"), own.signature());

@@ -11,7 +11,7 @@ import java.util.Optional;
 import org.foldbook.dsp.fold.Folding;
 import org.foldbook.model.Channel;
 import org.foldbook.model.Notebook;
-import org.foldbook.model.SweepMode;
+import org.foldbook.sweep.SimulationMode;
 import org.foldbook.demo.GearboxDemo;
 import org.foldbook.model.persistence.NotebookStore;
 import org.foldbook.sweep.ObservedPeak;
@@ -44,9 +44,9 @@ class DemoSurveyTest {
         Channel survey = nb.getExperiments().get(2).getChannels().get(0);
         ChannelData data = ChannelReader.read(survey, ChannelReader.ReadRequest.STRICT, ReadProgress.NONE);
         try (SweepEngine engine = new SweepEngine(2)) {
-            bare = ChannelSimulation.run(data, ChannelSimulation.setup(survey, SweepMode.BARE_SAMPLING, data.rateHz()),
+            bare = ChannelSimulation.run(data, ChannelSimulation.setup(survey, SimulationMode.BARE, data.rateHz()),
                     engine, SweepProgress.NONE);
-            filtered = ChannelSimulation.run(data, ChannelSimulation.setup(survey, SweepMode.FILTERED, data.rateHz()),
+            filtered = ChannelSimulation.run(data, ChannelSimulation.setup(survey, SimulationMode.MODELLED, data.rateHz()),
                     engine, SweepProgress.NONE);
         }
         for (SweepResult r : new SweepResult[] {bare, filtered}) {

@@ -15,7 +15,7 @@ import org.foldbook.model.AntiAliasFilter;
 import org.foldbook.model.Channel;
 import org.foldbook.model.Notebook;
 import org.foldbook.model.SimulationRun;
-import org.foldbook.model.SweepMode;
+import org.foldbook.sweep.SimulationMode;
 import org.foldbook.model.persistence.NotebookStore;
 import org.foldbook.sweep.SweepEngine;
 import org.foldbook.sweep.SweepProgress;
@@ -47,7 +47,7 @@ class SimulationArchiveTest {
         nb = TestNotebooks.write(dir);
         channel = TestNotebooks.channel(nb, 0);
         data = ChannelReader.read(channel, ChannelReader.ReadRequest.STRICT, ReadProgress.NONE);
-        setup = ChannelSimulation.setup(channel, SweepMode.FILTERED, data.rateHz()).withBand(0, 1000);
+        setup = ChannelSimulation.setup(channel, SimulationMode.MODELLED, data.rateHz()).withBand(0, 1000);
         try (SweepEngine engine = new SweepEngine(1)) {
             result = ChannelSimulation.run(data, setup, engine, SweepProgress.NONE);
         }
@@ -62,14 +62,14 @@ class SimulationArchiveTest {
     @Test
     void keptRunSurvivesReopening() throws IOException {
         SimulationRun run = keep();
-        assertEquals("simulations/run1-channel1-filtered.json", run.getPath());
+        assertEquals("simulations/run1-channel1-modelled.json", run.getPath());
         assertTrue(Files.isRegularFile(dir.resolve(run.getPath())));
         Path file = dir.resolve("test.foldbook");
         NotebookStore.save(nb, file);
 
         Notebook again = NotebookStore.load(file);
         Channel c = TestNotebooks.channel(again, 0);
-        SimulationRun back = SimulationArchive.latest(c, SweepMode.FILTERED).orElseThrow();
+        SimulationRun back = SimulationArchive.latest(c, SimulationMode.MODELLED).orElseThrow();
         assertEquals(Optional.empty(), SimulationArchive.staleness(back));
         assertEquals(data.sha256(), back.getSourceSha256());
         SimulationArchive.Kept kept = SimulationArchive.load(back);
@@ -82,7 +82,7 @@ class SimulationArchiveTest {
         // the band summary and the per-peak summaries come back with the result (recomputed from the rates)
         assertEquals(result.band(), kept.result().band());
         assertEquals(result.peakSummaries(), kept.result().peakSummaries());
-        assertTrue(SimulationArchive.latest(c, SweepMode.BARE_SAMPLING).isEmpty());
+        assertTrue(SimulationArchive.latest(c, SimulationMode.BARE).isEmpty());
     }
 
     @Test

@@ -11,7 +11,7 @@ import java.util.concurrent.CancellationException;
 
 import org.foldbook.dsp.fold.Folding;
 import org.foldbook.model.Channel;
-import org.foldbook.model.SweepMode;
+import org.foldbook.sweep.SimulationMode;
 import org.foldbook.sweep.SourceSpectrum;
 import org.foldbook.sweep.SweepEngine;
 import org.junit.jupiter.api.Test;
@@ -30,7 +30,7 @@ class WhatIfRateTest {
     void previewAndExactAgreeWithTheFoldFormula() throws IOException {
         Channel c = TestNotebooks.channel(TestNotebooks.write(dir), 1);
         ChannelData data = ChannelReader.read(c, ChannelReader.ReadRequest.STRICT, ReadProgress.NONE);
-        SimulationSetup setup = ChannelSimulation.setup(c, SweepMode.BARE_SAMPLING, data.rateHz());
+        SimulationSetup setup = ChannelSimulation.setup(c, SimulationMode.BARE, data.rateHz());
         SourceSpectrum source = SourceSpectrum.of(data.samples(), data.rateHz(), setup.settings());
         WhatIfRate w = new WhatIfRate(data.samples(), source, setup.resampling());
         WhatIfRate.Spectrum preview = w.preview(2000);

@@ -7,12 +7,12 @@ import java.util.Locale;
 import org.foldbook.model.Channel;
 import org.foldbook.model.RateSpacing;
 import org.foldbook.model.SignalChain;
-import org.foldbook.model.SweepMode;
 import org.foldbook.model.SweepPlan;
 import org.foldbook.model.WindowKind;
 import org.foldbook.model.derived.ChainModel;
 import org.foldbook.sweep.RateLadder;
 import org.foldbook.sweep.Resampling;
+import org.foldbook.sweep.SimulationMode;
 import org.foldbook.sweep.SpectrumSettings;
 import org.foldbook.sweep.SweepEngine;
 import org.foldbook.sweep.SweepProgress;
@@ -34,26 +34,33 @@ public final class ChannelSimulation {
     }
 
     /** The modes the channel's plan asks for, in the notebook's order; all three without a plan. */
-    public static List<SweepMode> plannedModes(Channel channel) {
+    public static List<SimulationMode> plannedModes(Channel channel) {
         SweepPlan plan = channel.getSweepPlan();
         if (plan == null || plan.getModes().isEmpty()) {
-            return List.of(SweepMode.BARE_SAMPLING, SweepMode.FILTERED, SweepMode.IDEAL_DECIMATOR);
+            return SimulationMode.notebookModes();
         }
-        return List.copyOf(plan.getModes());
+        return NotebookModes.of(plan.getModes());
     }
 
-    /** The chain whose elements the FILTERED mode applies: the plan's through-chain, else the channel's own. */
+    /** The mode a run of the channel starts in: the modelled one when the plan asks for it, else the plan's first. */
+    public static SimulationMode defaultMode(Channel channel) {
+        List<SimulationMode> planned = plannedModes(channel);
+        return planned.contains(SimulationMode.MODELLED) ? SimulationMode.MODELLED : planned.get(0);
+    }
+
+    /** The chain whose elements the modelled mode applies: the plan's through-chain, else the channel's own. */
     public static SignalChain throughChain(Channel channel) {
         SweepPlan plan = channel.getSweepPlan();
         return plan != null && plan.getThroughChain() != null ? plan.getThroughChain() : channel.getChain();
     }
 
     /**
-     * The set-up for {@code mode} of a recording at {@code sourceRateHz}.
+     * The set-up for {@code mode} (one a notebook keeps) of a recording at {@code sourceRateHz}.
      *
-     * @throws IllegalArgumentException when the plan is unusable (naming the field and value)
+     * @throws IllegalArgumentException when the plan is unusable (naming the field and value), or for a mode
+     *                                  a notebook does not keep
      */
-    public static SimulationSetup setup(Channel channel, SweepMode mode, double sourceRateHz) {
+    public static SimulationSetup setup(Channel channel, SimulationMode mode, double sourceRateHz) {
         if (!(sourceRateHz > 0) || Double.isInfinite(sourceRateHz)) {
             throw new IllegalArgumentException("source rate must be positive and finite, was " + sourceRateHz);
         }
@@ -64,11 +71,11 @@ public final class ChannelSimulation {
         Resampling resampling;
         String chainText;
         switch (mode) {
-            case BARE_SAMPLING -> {
+            case BARE -> {
                 resampling = Resampling.bare();
                 chainText = "no chain";
             }
-            case FILTERED -> {
+            case MODELLED -> {
                 SignalChain through = throughChain(channel);
                 if (through == null) {
                     throw new IllegalArgumentException("channel '" + channel.getName()
@@ -82,11 +89,12 @@ public final class ChannelSimulation {
                 resampling = Resampling.modelledChannel(sim.channel());
                 chainText = target.signature();
             }
-            case IDEAL_DECIMATOR -> {
+            case IDEAL -> {
                 resampling = Resampling.idealDecimator();
                 chainText = "ideal decimator";
             }
-            default -> throw new IllegalArgumentException("mode " + mode + " is not a simulation mode");
+            default -> throw new IllegalArgumentException("mode " + mode.word() + " is not one a notebook keeps (those are "
+                    + SimulationMode.words(SimulationMode.notebookModes()) + ")");
         }
         double low = Double.NaN;
         double high = Double.NaN;
@@ -99,7 +107,7 @@ public final class ChannelSimulation {
             }
         }
         String signature = String.format(Locale.ROOT, "%s | %s | rates %d from %.9g to %.9g S/s | segment %d",
-                mode.getLiteral(), chainText, ladder.size(), ladder.steps().get(0).effectiveRate(),
+                mode.word(), chainText, ladder.size(), ladder.steps().get(0).effectiveRate(),
                 ladder.steps().get(ladder.size() - 1).effectiveRate(), settings.maxSegment());
         return new SimulationSetup(mode, ladder, resampling, settings, low, high, notes, signature);
     }

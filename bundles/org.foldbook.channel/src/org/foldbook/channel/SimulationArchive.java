@@ -19,6 +19,7 @@ import org.foldbook.model.SimulationRun;
 import org.foldbook.model.SweepMode;
 import org.foldbook.model.derived.ChainModel;
 import org.foldbook.model.persistence.RecordingFiles;
+import org.foldbook.sweep.SimulationMode;
 import org.foldbook.sweep.SweepResult;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -59,13 +60,12 @@ public final class SimulationArchive {
     }
 
     /** The file a run of {@code channel} in {@code mode} is kept in. */
-    public static Path fileFor(Channel channel, SweepMode mode) {
+    public static Path fileFor(Channel channel, SimulationMode mode) {
         Path folder = RecordingFiles.notebookFolder(channel.eResource()).resolve(FOLDER);
         Experiment e = experimentOf(channel);
         int ei = e.eContainer() == null ? 0 : ((org.foldbook.model.Notebook) e.eContainer()).getExperiments().indexOf(e);
         int ci = e.getChannels().indexOf(channel);
-        String name = String.format(Locale.ROOT, "run%d-channel%d-%s.json", ei + 1, ci + 1,
-                mode.getLiteral().toLowerCase(Locale.ROOT).replace('_', '-'));
+        String name = String.format(Locale.ROOT, "run%d-channel%d-%s.json", ei + 1, ci + 1, mode.word());
         return folder.resolve(name);
     }
 
@@ -79,7 +79,7 @@ public final class SimulationArchive {
         String chains = chainSignature(channel);
         ObjectNode root = MAPPER.createObjectNode();
         root.put("format", FORMAT).put("version", VERSION).put("channel", channel.getName())
-                .put("mode", setup.mode().getLiteral()).put("sourceSha256", data.sha256())
+                .put("mode", setup.mode().word()).put("sourceSha256", data.sha256())
                 .put("chainSignature", chains).put("setupSignature", setup.signature())
                 .put("finishedOn", finishedOn.toString());
         var notes = root.putArray("notes");
@@ -95,7 +95,7 @@ public final class SimulationArchive {
         }
         SimulationRun run = NotebookFactory.eINSTANCE.createSimulationRun();
         run.setChannel(channel);
-        run.setMode(setup.mode());
+        run.setMode(NotebookModes.stored(setup.mode()));
         run.setPath(RecordingFiles.relativeTo(notebookFile(channel), file));
         run.setSourceSha256(data.sha256());
         run.setChainSignature(chains);
@@ -140,10 +140,11 @@ public final class SimulationArchive {
     }
 
     /** The latest run of {@code channel} in {@code mode} its experiment refers to, if any. */
-    public static Optional<SimulationRun> latest(Channel channel, SweepMode mode) {
+    public static Optional<SimulationRun> latest(Channel channel, SimulationMode mode) {
+        SweepMode stored = NotebookModes.stored(mode);
         SimulationRun best = null;
         for (SimulationRun r : experimentOf(channel).getSimulations()) {
-            if (r.getChannel() == channel && r.getMode() == mode && (best == null || (r.getFinishedOn() != null
+            if (r.getChannel() == channel && r.getMode() == stored && (best == null || (r.getFinishedOn() != null
                     && best.getFinishedOn() != null && r.getFinishedOn().after(best.getFinishedOn())))) {
                 best = r;
             }

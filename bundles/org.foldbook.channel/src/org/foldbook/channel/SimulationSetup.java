@@ -3,25 +3,25 @@ package org.foldbook.channel;
 import java.util.List;
 import java.util.Objects;
 
-import org.foldbook.model.SweepMode;
 import org.foldbook.sweep.RateLadder;
 import org.foldbook.sweep.Resampling;
+import org.foldbook.sweep.SimulationMode;
 import org.foldbook.sweep.SpectrumSettings;
 
 /**
  * Everything a stepped-rate simulation of one channel runs with, worked out from the notebook by
  * {@link ChannelSimulation#setup}; the command line may replace parts of it from its flags.
  *
- * @param mode       the notebook's name of the way the rates are reached
+ * @param mode       the way the rates are reached (one a notebook keeps)
  * @param ladder     the rates
- * @param resampling the sweep's operator for {@code mode} (for FILTERED: the through-chain's elements)
+ * @param resampling the sweep's operator for {@code mode} (for the modelled mode: the through-chain's elements)
  * @param settings   spectrum and peak settings
  * @param bandLowHz  band of interest, low edge; NaN without a band
  * @param bandHighHz band of interest, high edge; NaN without a band
  * @param notes      what the set-up could not honour or applied with a caveat, in words
  * @param signature  one line describing chain, plan and mode: a kept result with another one is stale
  */
-public record SimulationSetup(SweepMode mode, RateLadder ladder, Resampling resampling, SpectrumSettings settings,
+public record SimulationSetup(SimulationMode mode, RateLadder ladder, Resampling resampling, SpectrumSettings settings,
         double bandLowHz, double bandHighHz, List<String> notes, String signature) {
 
     public SimulationSetup {
@@ -44,7 +44,7 @@ public record SimulationSetup(SweepMode mode, RateLadder ladder, Resampling resa
 
     public SimulationSetup withResampling(Resampling next, String why) {
         return new SimulationSetup(mode, ladder, next, settings, bandLowHz, bandHighHz, notes,
-                signature + " | operator " + next.name() + " (" + why + ")");
+                signature + " | operator " + next.mode().word() + " (" + why + ")");
     }
 
     public SimulationSetup withSettings(SpectrumSettings next) {

@@ -85,6 +85,11 @@ class NotebookSweepTest {
 
     @Test
     void badChannelsAndChangedFilesAreNamed() throws IOException {
+        // a side-by-side check mode is not one a notebook keeps
+        Run kernel = run("sweep", "--notebook", notebook.toString(), "--channel", "housing Z survey", "--mode",
+                "bare-kernel");
+        assertEquals(Main.BAD_INPUT, kernel.code());
+        assertTrue(kernel.err().contains("bare, modelled, ideal") && kernel.err().contains("'bare-kernel'"), kernel.err());
         Run none = run("sweep", "--notebook", notebook.toString(), "--channel", "no such");
         assertEquals(Main.BAD_INPUT, none.code());
         assertTrue(none.err().contains("no such channel") && none.err().contains("housing Z survey"), none.err());

@@ -12,6 +12,8 @@ import java.nio.ByteOrder;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 
 import javax.sound.sampled.AudioFileFormat;
 import javax.sound.sampled.AudioFormat;
@@ -154,7 +156,7 @@ class SweepCommandTest {
                 assertEquals(inMemory.out(), streamed.out(), String.join(" ", args));
             }
         }
-        Run r = run("sweep", "--input", wav.toString(), "--to", "6000", "--steps", "3", "--mode", "preview", "--stream");
+        Run r = run("sweep", "--input", wav.toString(), "--to", "6000", "--steps", "3", "--preview", "--stream");
         assertEquals(Main.BAD_INPUT, r.code(), r.err());
         assertTrue(r.err().contains("--stream"), r.err());
     }
@@ -201,6 +203,11 @@ class SweepCommandTest {
         r = run("sweep", "--input", junk.toString(), "--rate", "1000", "--rates", "100", "--mode", "modelled");
         assertEquals(2, r.code());
         assertTrue(r.err().contains("--filter"), r.err());
+        // the mode words are the sweep's (SimulationMode); a wrong one is named with the words there are
+        r = run("sweep", "--input", junk.toString(), "--rate", "1000", "--rates", "100", "--mode", "filtered");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("--mode") && r.err().contains("'filtered'")
+                && r.err().contains("bare, modelled, ideal, bare-kernel, polyphase-default"), r.err());
         r = run("frobnicate");
         assertEquals(2, r.code());
         assertTrue(r.err().contains("frobnicate"), r.err());
@@ -221,8 +228,12 @@ class SweepCommandTest {
         double at15k = 10 * Math.log10(1 + Math.pow(15000.0 / 3000.0, 8)); // 55.918 dB
         double at1k = 10 * Math.log10(1 + Math.pow(1000.0 / 3000.0, 8)); // 0.00066 dB
         for (String mode : new String[] {"modelled", "preview"}) {
-            JsonNode json = json(run("sweep", "--input", wav.toString(), "--rates", "48000,12000", "--mode", mode,
-                    "--filter", "butterworth:4:3000", "--band", "0:2000", "--quiet"));
+            List<String> args = new ArrayList<>(List.of("sweep", "--input", wav.toString(), "--rates", "48000,12000",
+                    "--mode", "modelled", "--filter", "butterworth:4:3000", "--band", "0:2000", "--quiet"));
+            if (mode.equals("preview")) {
+                args.add("--preview");
+            }
+            JsonNode json = json(run(args.toArray(String[]::new)));
             assertEquals(mode.equals("preview") ? "preview-modelled" : "modelled", json.get("mode").asText());
             JsonNode low = rate(json, 12000);
             int id = sourceId(json, 15000);

@@ -1,6 +1,7 @@
 package org.foldbook.cli;
 
 import org.foldbook.dsp.NumberText;
+import org.foldbook.sweep.SimulationMode;
 
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
@@ -19,6 +20,18 @@ final class CliValues {
 
     /** A band of frequencies, 0 &lt;= low &lt; high, in Hz. */
     record BandHz(double low, double high) {
+    }
+
+    /** A simulation mode by its word ({@link SimulationMode#word()}). */
+    static final class Mode implements ITypeConverter<SimulationMode> {
+        @Override
+        public SimulationMode convert(String value) {
+            try {
+                return SimulationMode.ofWord(value);
+            } catch (IllegalArgumentException e) {
+                throw new TypeConversionException(e.getMessage());
+            }
+        }
     }
 
     /** A finite number &gt; 0 (rates, frequencies, seconds). */

@@ -15,10 +15,10 @@ import org.foldbook.channel.SimulationSetup;
 import org.foldbook.model.Channel;
 import org.foldbook.model.Experiment;
 import org.foldbook.model.Notebook;
-import org.foldbook.model.SweepMode;
 import org.foldbook.model.persistence.NotebookStore;
 import org.foldbook.sweep.RateLadder;
 import org.foldbook.sweep.RateResult;
+import org.foldbook.sweep.SimulationMode;
 import org.foldbook.sweep.SweepEngine;
 import org.foldbook.sweep.SweepProgress;
 import org.foldbook.sweep.SweepResult;
@@ -37,11 +37,7 @@ final class NotebookSweep {
     static int run(SweepOptions o, PrintWriter out, PrintWriter err) throws IOException {
         Notebook notebook = NotebookStore.load(o.notebook);
         Channel channel = find(notebook, o.channel, o.notebook);
-        SweepMode mode = o.mode != null ? switch (o.mode) {
-            case "bare" -> SweepMode.BARE_SAMPLING;
-            case "ideal" -> SweepMode.IDEAL_DECIMATOR;
-            default -> SweepMode.FILTERED;
-        } : defaultMode(channel);
+        SimulationMode mode = o.mode != null ? o.mode : ChannelSimulation.defaultMode(channel);
         ChannelData data = ChannelReader.read(channel, new ChannelReader.ReadRequest(o.acceptChanged),
                 ReadProgress.NONE);
         if (data.checksumChanged() && !o.quiet()) {
@@ -79,12 +75,6 @@ final class NotebookSweep {
         }
         SweepCommand.write(o, result, out);
         return Main.OK;
-    }
-
-    /** FILTERED when the plan asks for it (the chain's own answer), else the plan's first mode. */
-    static SweepMode defaultMode(Channel channel) {
-        List<SweepMode> planned = ChannelSimulation.plannedModes(channel);
-        return planned.contains(SweepMode.FILTERED) ? SweepMode.FILTERED : planned.get(0);
     }
 
     /** The channel called {@code name} (or EXPERIMENT/NAME); an error naming the choices otherwise. */

@@ -36,7 +36,7 @@ import picocli.CommandLine.Spec;
         description = {"Stepped-rate simulation: re-samples a recording at a ladder of lower rates and says, for every "
                 + "spectral peak of the source, whether it survives, folds (where to), is removed, buried, hidden or "
                 + "merged. JSON out (layout: org.foldbook.sweep package-info).",
-            "  foldbook sweep --input FILE [--rate HZ] [--channel N] (--grid FILE | --to HZ --steps N | --rates ...)",
+            "  foldbook sweep --input FILE [--rate HZ] [--channel N] (--grid FILE | --to HZ --steps N | --rates ...) [--mode MODE] [--preview]",
             "  foldbook sweep --notebook FILE --channel NAME [--mode bare|modelled|ideal] [--accept-changed]"},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:done", "2:usage or input error (the message names the option or the file)"})
@@ -153,20 +153,18 @@ final class SweepCommand implements Callable<Integer> {
 
     static Resampling mode(SweepOptions o) {
         return switch (o.mode()) {
-            case "bare" -> Resampling.bare();
-            case "bare-kernel" -> Resampling.bareKernel();
-            case "modelled" -> Resampling.modelledChannel(channel(o));
-            case "ideal" -> Resampling.idealDecimator();
-            case "polyphase-default" -> Resampling.polyphaseDefault();
-            case "preview" -> Resampling.modelledChannel(channel(o));
-            default -> throw new IllegalArgumentException("--mode " + o.mode());
+            case BARE -> Resampling.bare();
+            case BARE_KERNEL -> Resampling.bareKernel();
+            case MODELLED -> Resampling.modelledChannel(channel(o));
+            case IDEAL -> Resampling.idealDecimator();
+            case POLYPHASE_DEFAULT -> Resampling.polyphaseDefault();
         };
     }
 
     private static SweepResult sweep(SweepOptions o, RecordingLoader.Loaded rec, RateLadder ladder, PrintWriter err) {
         Resampling mode = mode(o);
         SourceSpectrum ref = SourceSpectrum.of(rec.samples(), rec.rate(), o.spectrumSettings());
-        if (o.mode().equals("preview")) {
+        if (o.preview()) {
             return new FoldPreview(ref).preview(ladder, mode);
         }
         try (SweepEngine engine = new SweepEngine(o.threads())) {

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.Optional;
 
 import org.foldbook.sweep.PeakThreshold;
+import org.foldbook.sweep.SimulationMode;
 import org.foldbook.sweep.SpectrumSettings;
 
 import picocli.CommandLine.Option;
@@ -46,13 +47,16 @@ final class SweepOptions {
     @Option(names = "--max-denominator", paramLabel = "D", converter = CliValues.AtLeastOne.class,
             description = "bound of the up/down ratios' denominators (default ${DEFAULT-VALUE})")
     int maxDenominator = 1000;
-    @Option(names = "--mode", paramLabel = "MODE", description = "bare (default with --input): no anti-alias filter, "
-            + "exact to 0.49 fs0; bare-kernel: the windowed-sinc kernel alone (exact to 0.39 fs0); modelled: the chain's "
-            + "filter (--filter, --digitizer, --exposure; with --notebook the plan's through-chain) with its exact "
-            + "response, then bare; ideal: a correct decimator (0.45/0.5 fs, 100 dB); polyphase-default: the default "
-            + "filter of a common polyphase resampler, for side-by-side checks; preview: fold the source spectrum "
-            + "through the chain without re-sampling")
-    String mode;
+    @Option(names = "--mode", paramLabel = "MODE", converter = CliValues.Mode.class, description = "bare (default "
+            + "with --input): no anti-alias filter, exact to 0.49 fs0; modelled: the chain's filter (--filter, "
+            + "--digitizer, --exposure; with --notebook the plan's through-chain) with its exact response, then bare; "
+            + "ideal: a correct decimator (0.45/0.5 fs, 100 dB); with --input also bare-kernel: the windowed-sinc "
+            + "kernel alone (exact to 0.39 fs0), and polyphase-default: the default filter of a common polyphase "
+            + "resampler, for side-by-side checks")
+    SimulationMode mode;
+    @Option(names = "--preview", description = "with --input: fold the source spectrum through the mode's response "
+            + "without re-sampling (fast; the mode in the JSON is preview-MODE)")
+    boolean preview;
     @Option(names = "--filter", paramLabel = "KIND:...", description = "butterworth:ORDER:HZ, bessel:ORDER:HZ or rc:HZ")
     String filter;
     @Option(names = "--digitizer", paramLabel = "PASS:STOP:DB", description = "a digitizer's built-in filter: pass "
@@ -139,8 +143,12 @@ final class SweepOptions {
         return maxDenominator;
     }
 
-    String mode() {
-        return mode == null ? "bare" : mode;
+    SimulationMode mode() {
+        return mode == null ? SimulationMode.BARE : mode;
+    }
+
+    boolean preview() {
+        return preview;
     }
 
     Optional<String> filter() {
@@ -234,8 +242,12 @@ final class SweepOptions {
             if (channel == null) {
                 throw new IllegalArgumentException("--notebook FILE and --channel NAME go together");
             }
-            if (mode != null) {
-                oneOf("--mode", mode, "bare", "modelled", "ideal");
+            if (mode != null && !mode.inNotebooks()) {
+                throw new IllegalArgumentException("--mode with --notebook is one of "
+                        + SimulationMode.words(SimulationMode.notebookModes()) + ", was '" + mode + "'");
+            }
+            if (preview) {
+                throw new IllegalArgumentException("--preview works with --input");
             }
             if (ways > 1 || grid != null) {
                 throw new IllegalArgumentException("with --notebook, replace the plan's rates with --to/--steps or --rates");
@@ -251,19 +263,18 @@ final class SweepOptions {
             }
             return;
         }
-        oneOf("--mode", mode(), "bare", "bare-kernel", "modelled", "ideal", "polyphase-default", "preview");
         if (acceptChanged) {
             throw new IllegalArgumentException("--accept-changed goes with --notebook");
         }
         if (ways != 1) {
             throw new IllegalArgumentException("give exactly one rate grid: --grid FILE, --to HZ --steps N, or --rates");
         }
-        if (mode().equals("modelled") && filter == null && digitizer == null && exposure == null) {
+        if (mode() == SimulationMode.MODELLED && filter == null && digitizer == null && exposure == null) {
             throw new IllegalArgumentException(
                     "--mode modelled needs --filter (e.g. butterworth:4:8000), --digitizer or --exposure");
         }
-        if (stream && mode().equals("preview")) {
-            throw new IllegalArgumentException("--stream works with the time-domain modes, not --mode preview");
+        if (stream && preview) {
+            throw new IllegalArgumentException("--stream re-samples in the time domain; --preview does not");
         }
     }
 

@@ -109,7 +109,7 @@ final class SurveyScenario {
         plan.setMinRateHz(25600.0);
         plan.setRateCount(16);
         plan.setSpacing(RateSpacing.GEOMETRIC);
-        plan.getModes().addAll(List.of(SweepMode.BARE_SAMPLING, SweepMode.FILTERED, SweepMode.IDEAL_DECIMATOR));
+        plan.getModes().addAll(List.of(SweepMode.BARE, SweepMode.MODELLED, SweepMode.IDEAL));
         plan.setSegmentLength(4096);
         plan.setThroughChain(everyday);
         plan.setBandLowHz(0.0);

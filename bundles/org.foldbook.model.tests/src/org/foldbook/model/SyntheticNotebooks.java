@@ -138,7 +138,7 @@ public final class SyntheticNotebooks {
         plan.setMaxRateHz(20000.0);
         plan.setRateCount(16);
         plan.setSpacing(RateSpacing.GEOMETRIC);
-        plan.getModes().addAll(java.util.List.of(SweepMode.BARE_SAMPLING, SweepMode.FILTERED));
+        plan.getModes().addAll(java.util.List.of(SweepMode.BARE, SweepMode.MODELLED));
         plan.setWindow(WindowKind.HANN);
         plan.setSegmentLength(4096);
         channel.setSweepPlan(plan);

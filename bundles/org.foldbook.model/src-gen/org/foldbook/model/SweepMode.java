@@ -14,89 +14,90 @@ import org.eclipse.emf.common.util.Enumerator;
  * A representation of the literals of the enumeration '<em><b>Sweep Mode</b></em>',
  * and utility methods for working with them.
  * <!-- end-user-doc -->
+ * <!-- begin-model-doc -->
+ * A way of taking a recording to a lower rate that a sweep plan can ask for. The literals are the words of org.foldbook.sweep.SimulationMode (mapped by org.foldbook.channel.NotebookModes); older files hold BARE_SAMPLING, FILTERED, IDEAL_DECIMATOR and still load (NotebookMigration.OLD_SWEEP_MODES).
+ * <!-- end-model-doc -->
  * @see org.foldbook.model.NotebookPackage#getSweepMode()
  * @model
  * @generated
  */
 public enum SweepMode implements Enumerator {
 	/**
-	 * The '<em><b>BARE SAMPLING</b></em>' literal object.
+	 * The '<em><b>BARE</b></em>' literal object.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
 	 * Re-sample with no anti-alias filter: shows what folds.
 	 * <!-- end-model-doc -->
-	 * @see #BARE_SAMPLING_VALUE
+	 * @see #BARE_VALUE
 	 * @generated
 	 * @ordered
 	 */
-	BARE_SAMPLING(0, "BARE_SAMPLING", "BARE_SAMPLING"),
-
-	/**
-	 * The '<em><b>FILTERED</b></em>' literal object.
+	BARE(0, "BARE", "bare"), /**
+	 * The '<em><b>MODELLED</b></em>' literal object.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
 	 * Through the channel's own modelled chain, then re-sample: shows what the chain removes.
 	 * <!-- end-model-doc -->
-	 * @see #FILTERED_VALUE
+	 * @see #MODELLED_VALUE
 	 * @generated
 	 * @ordered
 	 */
-	FILTERED(1, "FILTERED", "FILTERED"), /**
-	 * The '<em><b>IDEAL DECIMATOR</b></em>' literal object.
+	MODELLED(1, "MODELLED", "modelled"), /**
+	 * The '<em><b>IDEAL</b></em>' literal object.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
 	 * A correct digital down-sampler: what a proper decimation would keep.
 	 * <!-- end-model-doc -->
-	 * @see #IDEAL_DECIMATOR_VALUE
+	 * @see #IDEAL_VALUE
 	 * @generated
 	 * @ordered
 	 */
-	IDEAL_DECIMATOR(2, "IDEAL_DECIMATOR", "IDEAL_DECIMATOR");
+	IDEAL(2, "IDEAL", "ideal");
 
 	/**
-	 * The '<em><b>BARE SAMPLING</b></em>' literal value.
+	 * The '<em><b>BARE</b></em>' literal value.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
 	 * Re-sample with no anti-alias filter: shows what folds.
 	 * <!-- end-model-doc -->
-	 * @see #BARE_SAMPLING
-	 * @model
+	 * @see #BARE
+	 * @model literal="bare"
 	 * @generated
 	 * @ordered
 	 */
-	public static final int BARE_SAMPLING_VALUE = 0;
+	public static final int BARE_VALUE = 0;
 
 	/**
-	 * The '<em><b>FILTERED</b></em>' literal value.
+	 * The '<em><b>MODELLED</b></em>' literal value.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
 	 * Through the channel's own modelled chain, then re-sample: shows what the chain removes.
 	 * <!-- end-model-doc -->
-	 * @see #FILTERED
-	 * @model
+	 * @see #MODELLED
+	 * @model literal="modelled"
 	 * @generated
 	 * @ordered
 	 */
-	public static final int FILTERED_VALUE = 1;
+	public static final int MODELLED_VALUE = 1;
 
 	/**
-	 * The '<em><b>IDEAL DECIMATOR</b></em>' literal value.
+	 * The '<em><b>IDEAL</b></em>' literal value.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
 	 * A correct digital down-sampler: what a proper decimation would keep.
 	 * <!-- end-model-doc -->
-	 * @see #IDEAL_DECIMATOR
-	 * @model
+	 * @see #IDEAL
+	 * @model literal="ideal"
 	 * @generated
 	 * @ordered
 	 */
-	public static final int IDEAL_DECIMATOR_VALUE = 2;
+	public static final int IDEAL_VALUE = 2;
 
 	/**
 	 * An array of all the '<em><b>Sweep Mode</b></em>' enumerators.
@@ -106,9 +107,9 @@ public enum SweepMode implements Enumerator {
 	 */
 	private static final SweepMode[] VALUES_ARRAY =
 		new SweepMode[] {
-			BARE_SAMPLING,
-			FILTERED,
-			IDEAL_DECIMATOR,
+			BARE,
+			MODELLED,
+			IDEAL,
 		};
 
 	/**
@@ -165,9 +166,9 @@ public enum SweepMode implements Enumerator {
 	 */
 	public static SweepMode get(int value) {
 		switch (value) {
-			case BARE_SAMPLING_VALUE: return BARE_SAMPLING;
-			case FILTERED_VALUE: return FILTERED;
-			case IDEAL_DECIMATOR_VALUE: return IDEAL_DECIMATOR;
+			case BARE_VALUE: return BARE;
+			case MODELLED_VALUE: return MODELLED;
+			case IDEAL_VALUE: return IDEAL;
 		}
 		return null;
 	}

@@ -191,7 +191,7 @@ public interface SweepPlan extends EObject {
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
-	 * The chain whose modelled elements the FILTERED mode applies (e.g. the everyday chain, for a survey recording made through a wide-band one); unset: the channel's own chain. Elements the recording already passed are not applied twice.
+	 * The chain whose modelled elements the modelled mode applies (e.g. the everyday chain, for a survey recording made through a wide-band one); unset: the channel's own chain. Elements the recording already passed are not applied twice.
 	 * <!-- end-model-doc -->
 	 * @return the value of the '<em>Through Chain</em>' reference.
 	 * @see #setThroughChain(SignalChain)

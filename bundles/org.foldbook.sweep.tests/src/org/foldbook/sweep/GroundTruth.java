@@ -213,7 +213,7 @@ final class GroundTruth {
                 RateStep step = k.ladder().get(i);
                 long m = step.outputLength(N);
                 RateResult want = stage(k.reference(step, m, x), step, ref.classifier(), k.mode());
-                compare("case " + c + " " + k.mode().name() + " at " + step.effectiveRate() + " S/s (" + step.up()
+                compare("case " + c + " " + k.mode().mode().word() + " at " + step.effectiveRate() + " S/s (" + step.up()
                         + "/" + step.down() + "), tones " + k.tones() + k.extra(), want, sweep.rates().get(i), bad);
                 for (SourceFate f : want.fates()) {
                     seen.merge(f.verdict(), 1, Integer::sum);

@@ -154,7 +154,7 @@ public final class FoldPreview {
         for (RateStep s : ladder.steps()) {
             rates.add(preview(s, chain));
         }
-        return new SweepResult("preview-" + chain.name(), source.sourceRate(), source.samples(), source.binWidth(),
+        return new SweepResult("preview-" + chain.mode().word(), source.sourceRate(), source.samples(), source.binWidth(),
                 source.peaks(), rates, Optional.empty(), chain.accuracy(source.sourceRate()),
                 chain.warnings(source.sourceRate()), source.summarised(), source.settings().threshold().describe());
     }

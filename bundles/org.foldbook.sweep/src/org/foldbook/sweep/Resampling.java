@@ -25,8 +25,8 @@ import org.foldbook.dsp.resample.SimulationWarning;
  */
 public interface Resampling {
 
-    /** Short name used in JSON and on the command line, e.g. {@code bare}. */
-    String name();
+    /** Which way this is; its {@link SimulationMode#word() word} is the mode of the sweep's JSON. */
+    SimulationMode mode();
 
     /**
      * Work done once per sweep on the whole recording, before any rate (e.g. the modelled analog filter,
@@ -84,7 +84,7 @@ public interface Resampling {
      * interpolator adds no images of its own.
      */
     static Resampling bare() {
-        return new ModelledFilter(ModelledChannel.none(), "bare");
+        return new ModelledFilter(ModelledChannel.none(), SimulationMode.BARE);
     }
 
     /**
@@ -142,8 +142,8 @@ public interface Resampling {
         }
 
         @Override
-        public String name() {
-            return "ideal";
+        public SimulationMode mode() {
+            return SimulationMode.IDEAL;
         }
 
         private IdealDecimator design(RateStep step) {
@@ -208,8 +208,8 @@ public interface Resampling {
         }
 
         @Override
-        public String name() {
-            return "polyphase-default";
+        public SimulationMode mode() {
+            return SimulationMode.POLYPHASE_DEFAULT;
         }
 
         @Override
@@ -257,8 +257,8 @@ public interface Resampling {
         }
 
         @Override
-        public String name() {
-            return "bare-kernel";
+        public SimulationMode mode() {
+            return SimulationMode.BARE_KERNEL;
         }
 
         @Override
@@ -285,17 +285,17 @@ public interface Resampling {
     /** The modelled channel: analog filters and exposure once, exactly, at 2·fs0; the digitizer filter per rate. */
     final class ModelledFilter implements Resampling {
         private final ModelledChannel channel;
-        private final String name;
+        private final SimulationMode mode;
         private final Map<Double, ExactChainFilter> exact = new ConcurrentHashMap<>();
         private final Map<RateStep, ModelledChannelResampler> samplers = new ConcurrentHashMap<>();
 
         ModelledFilter(ModelledChannel channel) {
-            this(channel, "modelled");
+            this(channel, SimulationMode.MODELLED);
         }
 
-        ModelledFilter(ModelledChannel channel, String name) {
+        ModelledFilter(ModelledChannel channel, SimulationMode mode) {
             this.channel = channel;
-            this.name = name;
+            this.mode = mode;
         }
 
         public ModelledChannel channel() {
@@ -303,8 +303,8 @@ public interface Resampling {
         }
 
         @Override
-        public String name() {
-            return name;
+        public SimulationMode mode() {
+            return mode;
         }
 
         private ExactChainFilter exactAt(double sourceRate) {

@@ -176,7 +176,7 @@ public final class StreamingSweep implements AutoCloseable {
             results[r.step.index()] = result;
             progress.rateDone(result, done.incrementAndGet(), results.length);
         });
-        return new SweepResult(mode.name(), fs0, n, ref.binWidth(), ref.peaks(), Arrays.asList(results),
+        return new SweepResult(mode.mode().word(), fs0, n, ref.binWidth(), ref.peaks(), Arrays.asList(results),
                 Optional.empty(), mode.accuracy(fs0), mode.warnings(fs0), ref.summarised(),
                 settings.threshold().describe());
     }

@@ -132,7 +132,7 @@ public final class SweepEngine implements AutoCloseable {
             }
             throw new IllegalStateException(c);
         }
-        return new SweepResult(mode.name(), ref.sourceRate(), source.length, ref.binWidth(), ref.peaks(),
+        return new SweepResult(mode.mode().word(), ref.sourceRate(), source.length, ref.binWidth(), ref.peaks(),
                 Arrays.asList(results), Optional.empty(), mode.accuracy(ref.sourceRate()), mode.warnings(ref.sourceRate()),
                 ref.summarised(), settings.threshold().describe());
     }

@@ -6,8 +6,10 @@
  * <ul>
  * <li>{@link org.foldbook.sweep.RateLadder}: requested rates (list, linear, geometric) snapped to exact
  * ratios up/down, or a grid file of {@code index up down fs} lines read verbatim;</li>
- * <li>{@link org.foldbook.sweep.Resampling}: the modes — bare sampler, the channel's modelled chain,
- * ideal decimator, scipy-resample_poly-compatible — each with its |H(f)|²;</li>
+ * <li>{@link org.foldbook.sweep.SimulationMode}: the one vocabulary of modes (the JSON's {@code mode}, the
+ * command line's {@code --mode}, the notebook's stored literal, the workbench's names);
+ * {@link org.foldbook.sweep.Resampling}: each mode's operator — bare sampler, the channel's modelled chain,
+ * ideal decimator, scipy-resample_poly-compatible — with its |H(f)|²;</li>
  * <li>{@link org.foldbook.sweep.SweepEngine}: fixed thread pool over rates; per rate re-sample →
  * Welch PSD (streamed, {@link org.foldbook.dsp.spectrum.WelchAccumulator}) → peaks → verdicts;</li>
  * <li>{@link org.foldbook.sweep.FoldPreview}: the same verdicts from the source PSD alone, without
@@ -18,7 +20,7 @@
  *
  * <h2>JSON layout ({@code format = "foldbook-sweep"}, {@code version = 1})</h2>
  * <pre>
- * { "format", "version", "mode",
+ * { "format", "version", "mode" (a {@link org.foldbook.sweep.SimulationMode#word() mode word}; preview-WORD from the preview),
  *   "source": { "rate", "samples", "binWidth", "peaks": [ { "id", "frequency", "levelDb" } ],
  *               "summarised": { "count", "belowDb", "highestDb" }, "peakRule" },
  *   "accuracy": { "upToHz" or "upToRateFraction", "levelDb", "statement" },

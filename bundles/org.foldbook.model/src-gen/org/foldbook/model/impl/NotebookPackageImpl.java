@@ -1776,9 +1776,9 @@ public class NotebookPackageImpl extends EPackageImpl implements NotebookPackage
 		addEEnumLiteral(rateSpacingEEnum, RateSpacing.LINEAR);
 
 		initEEnum(sweepModeEEnum, SweepMode.class, "SweepMode");
-		addEEnumLiteral(sweepModeEEnum, SweepMode.BARE_SAMPLING);
-		addEEnumLiteral(sweepModeEEnum, SweepMode.FILTERED);
-		addEEnumLiteral(sweepModeEEnum, SweepMode.IDEAL_DECIMATOR);
+		addEEnumLiteral(sweepModeEEnum, SweepMode.BARE);
+		addEEnumLiteral(sweepModeEEnum, SweepMode.MODELLED);
+		addEEnumLiteral(sweepModeEEnum, SweepMode.IDEAL);
 
 		initEEnum(windowKindEEnum, WindowKind.class, "WindowKind");
 		addEEnumLiteral(windowKindEEnum, WindowKind.HANN);

@@ -75,7 +75,7 @@ public class SimulationRunImpl extends MinimalEObjectImpl.Container implements S
 	 * @generated
 	 * @ordered
 	 */
-	protected static final SweepMode MODE_EDEFAULT = SweepMode.BARE_SAMPLING;
+	protected static final SweepMode MODE_EDEFAULT = SweepMode.BARE;
 
 	/**
 	 * The cached value of the '{@link #getMode() <em>Mode</em>}' attribute.

@@ -7,12 +7,15 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 
+import org.eclipse.emf.ecore.EDataType;
 import org.eclipse.emf.ecore.EObject;
 import org.eclipse.emf.ecore.util.FeatureMap;
 import org.eclipse.emf.ecore.xmi.XMLResource;
 import org.eclipse.emf.ecore.xml.type.AnyType;
+import org.foldbook.model.NotebookPackage;
 import org.foldbook.model.Recording;
 import org.foldbook.model.Sensor;
+import org.foldbook.model.SweepMode;
 
 /**
  * Reads notebooks of the previous format version, 0.9 (namespace {@value #PREVIOUS_NS_URI}; its
@@ -26,12 +29,25 @@ import org.foldbook.model.Sensor;
  * The resource loads a 0.9 file with the current package (its namespace maps to it), so the old
  * attributes arrive as unknown features; this class turns them into the new ones. Anything else
  * unknown is left for the resource to write back unchanged.
+ *
+ * <p>Within version 1 the {@link SweepMode} literals became the sweep's mode words ({@code bare},
+ * {@code modelled}, {@code ideal}); files written before hold {@link #OLD_SWEEP_MODES}, read as the same
+ * modes and written back with the new literals.
  */
 public final class NotebookMigration {
 
     public static final String PREVIOUS_NS_URI = "urn:foldbook:notebook:0.9";
 
+    /** The {@link SweepMode} literals of files written before the literals became the mode words. */
+    public static final Map<String, SweepMode> OLD_SWEEP_MODES = Map.of("BARE_SAMPLING", SweepMode.BARE,
+            "FILTERED", SweepMode.MODELLED, "IDEAL_DECIMATOR", SweepMode.IDEAL);
+
     private NotebookMigration() {
+    }
+
+    /** The value an old literal of {@code type} stands for, or null when {@code value} is none. */
+    static Object oldLiteral(EDataType type, String value) {
+        return type == NotebookPackage.Literals.SWEEP_MODE ? OLD_SWEEP_MODES.get(value) : null;
     }
 
     static void migratePrevious(XMLResource resource) throws IOException {

@@ -6,12 +6,15 @@ import java.util.HashMap;
 import java.util.Map;
 
 import org.eclipse.emf.common.util.URI;
+import org.eclipse.emf.ecore.EDataType;
+import org.eclipse.emf.ecore.EFactory;
 import org.eclipse.emf.ecore.EPackage;
 import org.eclipse.emf.ecore.xmi.PackageNotFoundException;
 import org.eclipse.emf.ecore.xmi.XMLHelper;
 import org.eclipse.emf.ecore.xmi.XMLLoad;
 import org.eclipse.emf.ecore.xmi.XMLResource;
 import org.eclipse.emf.ecore.xmi.impl.SAXXMIHandler;
+import org.eclipse.emf.ecore.xmi.impl.XMIHelperImpl;
 import org.eclipse.emf.ecore.xmi.impl.XMILoadImpl;
 import org.eclipse.emf.ecore.xmi.impl.XMIResourceImpl;
 import org.foldbook.model.NotebookPackage;
@@ -26,7 +29,8 @@ import org.xml.sax.helpers.DefaultHandler;
  * <li>keeps attributes and elements it does not know (a file written by a newer version) and writes
  * them back on save, so nothing is lost;</li>
  * <li>reads files of the previous version ({@link NotebookMigration#PREVIOUS_NS_URI}) and migrates
- * them in memory; they are written back in the current version.</li>
+ * them in memory; they are written back in the current version;</li>
+ * <li>reads the sweep-mode literals of older version-1 files ({@link NotebookMigration#OLD_SWEEP_MODES}).</li>
  * </ul>
  */
 public class NotebookResource extends XMIResourceImpl {
@@ -70,6 +74,18 @@ public class NotebookResource extends XMIResourceImpl {
             }
             throw e;
         }
+    }
+
+    /** Values are read as usual, except literals an older file may hold ({@link NotebookMigration#oldLiteral}). */
+    @Override
+    protected XMLHelper createXMLHelper() {
+        return new XMIHelperImpl(this) {
+            @Override
+            protected Object createFromString(EFactory factory, EDataType type, String value) {
+                Object old = NotebookMigration.oldLiteral(type, value);
+                return old != null ? old : super.createFromString(factory, type, value);
+            }
+        };
     }
 
     @Override

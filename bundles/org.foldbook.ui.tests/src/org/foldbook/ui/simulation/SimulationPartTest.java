@@ -30,7 +30,7 @@ import org.foldbook.channel.ChannelSimulation;
 import org.foldbook.channel.ReadProgress;
 import org.foldbook.model.Channel;
 import org.foldbook.model.Experiment;
-import org.foldbook.model.SweepMode;
+import org.foldbook.sweep.SimulationMode;
 import org.foldbook.demo.GearboxDemo;
 import org.foldbook.model.derived.Quantities;
 import org.foldbook.sweep.SweepEngine;
@@ -91,7 +91,7 @@ class SimulationPartTest {
         assertTrue(label("status").getText().startsWith("No kept run"), label("status").getText());
         runSweep();
         Table table = (Table) control("verdicts");
-        JsonNode cli = cliJson(SweepMode.FILTERED);
+        JsonNode cli = cliJson(SimulationMode.MODELLED);
         JsonNode rates = cli.path("rates");
         int sources = cli.path("source").path("peaks").size();
         assertEquals(sources * rates.size(), table.getItemCount());
@@ -244,7 +244,7 @@ class SimulationPartTest {
         }
     }
 
-    private JsonNode cliJson(SweepMode mode) throws IOException {
+    private JsonNode cliJson(SimulationMode mode) throws IOException {
         ChannelData data = ChannelReader.read(survey, ChannelReader.ReadRequest.STRICT, ReadProgress.NONE);
         try (SweepEngine engine = new SweepEngine(2)) {
             String json = ChannelSimulation.run(data, ChannelSimulation.setup(survey, mode, data.rateHz()), engine,

@@ -121,11 +121,11 @@ class SweepPeakPreferencesTest {
 
     @Test
     void theDefaultRuleKeepsTheCommandLinesSetUp() {
-        var setup = new SimulationPlanner.Request(org.foldbook.model.SweepMode.BARE_SAMPLING, null,
+        var setup = new SimulationPlanner.Request(org.foldbook.sweep.SimulationMode.BARE, null,
                 org.foldbook.sweep.PeakThreshold.DEFAULT).setup(mic, SyntheticTones.RATE);
-        assertEquals(org.foldbook.channel.ChannelSimulation.setup(mic, org.foldbook.model.SweepMode.BARE_SAMPLING,
+        assertEquals(org.foldbook.channel.ChannelSimulation.setup(mic, org.foldbook.sweep.SimulationMode.BARE,
                 SyntheticTones.RATE).signature(), setup.signature());
-        var other = new SimulationPlanner.Request(org.foldbook.model.SweepMode.BARE_SAMPLING, null,
+        var other = new SimulationPlanner.Request(org.foldbook.sweep.SimulationMode.BARE, null,
                 new SpectrumSettingsValues(true, 20, 31, 16384).threshold()).setup(mic, SyntheticTones.RATE);
         assertEquals(new SpectrumSettingsValues(true, 20, 31, 16384).threshold().toString(),
                 SimulationPlanner.thresholdOf(other.signature()));

@@ -26,9 +26,9 @@ import org.foldbook.channel.WhatIfRate;
 import org.foldbook.model.Channel;
 import org.foldbook.model.NotebookPackage;
 import org.foldbook.model.SimulationRun;
-import org.foldbook.model.SweepMode;
 import org.foldbook.model.derived.Quantities;
 import org.foldbook.sweep.PeakThreshold;
+import org.foldbook.sweep.SimulationMode;
 import org.foldbook.sweep.SweepResult;
 import org.foldbook.ui.export.ExportMenu;
 import org.foldbook.ui.notebook.CurrentNotebook;
@@ -92,8 +92,8 @@ public class SimulationPart {
         GridDataFactory.fillDefaults().grab(true, false).applyTo(channelLabel);
         new Label(head, SWT.NONE).setText("Reach rates by:");
         mode = new Combo(head, SWT.READ_ONLY);
-        mode.setItems(SimulationPlanner.MODE_NAMES);
-        mode.select(1);
+        mode.setItems(SimulationMode.notebookModes().stream().map(SimulationMode::title).toArray(String[]::new));
+        mode.select(SimulationMode.notebookModes().indexOf(SimulationMode.MODELLED));
         name(mode, "mode");
         mode.addListener(SWT.Selection, e -> showKept());
         run = button(head, "Run sweep", "run");
@@ -196,8 +196,7 @@ public class SimulationPart {
                 : "Channel: " + next.getName() + (next.getRecording() == null ? "" : " (" + next.getRecording().getPath() + ")"));
         run.setEnabled(next != null);
         if (next != null) {
-            List<SweepMode> planned = org.foldbook.channel.ChannelSimulation.plannedModes(next);
-            mode.select((planned.contains(SweepMode.FILTERED) ? SweepMode.FILTERED : planned.get(0)).getValue());
+            mode.select(SimulationMode.notebookModes().indexOf(org.foldbook.channel.ChannelSimulation.defaultMode(next)));
         }
         refreshPlan();
         showKept();
@@ -208,8 +207,8 @@ public class SimulationPart {
         plan.show(document, channel);
     }
 
-    private SweepMode selectedMode() {
-        return SweepMode.get(mode.getSelectionIndex());
+    private SimulationMode selectedMode() {
+        return SimulationMode.notebookModes().get(mode.getSelectionIndex());
     }
 
     /** The kept run of the channel in the chosen mode, or an empty view. */
@@ -221,7 +220,7 @@ public class SimulationPart {
         }
         var kept = SimulationArchive.latest(channel, selectedMode());
         if (kept.isEmpty()) {
-            status.setText("No kept run of this channel in " + SimulationPlanner.nameOf(selectedMode())
+            status.setText("No kept run of this channel in " + selectedMode().title()
                     + ". Run the sweep.");
             return;
         }
@@ -274,7 +273,7 @@ public class SimulationPart {
             problem(e.getMessage());
             return;
         }
-        status.setText("Simulating " + channel.getName() + " in " + SimulationPlanner.nameOf(request.mode()) + " …");
+        status.setText("Simulating " + channel.getName() + " in " + request.mode().title() + " …");
         run.setEnabled(false);
         cancel.setEnabled(true);
         schedule(new SimulationJob(channel, request, true, this::finished));

@@ -16,10 +16,10 @@ import org.foldbook.model.NotebookFactory;
 import org.foldbook.model.NotebookPackage;
 import org.foldbook.model.RateSpacing;
 import org.foldbook.model.SignalChain;
-import org.foldbook.model.SweepMode;
 import org.foldbook.model.SweepPlan;
 import org.foldbook.sweep.PeakThreshold;
 import org.foldbook.sweep.RateLadder;
+import org.foldbook.sweep.SimulationMode;
 
 /**
  * The simulation part's plan, without SWT: typed values become undoable EMF commands on the channel's
@@ -30,14 +30,7 @@ import org.foldbook.sweep.RateLadder;
 final class SimulationPlanner {
     private static final NotebookPackage P = NotebookPackage.eINSTANCE;
 
-    /** Names of the modes for people, in the notebook's order. */
-    static final String[] MODE_NAMES = {"bare sampling", "the chain's own model", "ideal decimator"};
-
     private SimulationPlanner() {
-    }
-
-    static String nameOf(SweepMode mode) {
-        return MODE_NAMES[mode.getValue()];
     }
 
     /**
@@ -45,7 +38,7 @@ final class SimulationPlanner {
      * of the workbench's preferences (null: the sweep's default). With the default rule the set-up is the
      * command line's {@code sweep --notebook} exactly.
      */
-    record Request(SweepMode mode, double[] rateList, PeakThreshold threshold) {
+    record Request(SimulationMode mode, double[] rateList, PeakThreshold threshold) {
         SimulationSetup setup(Channel channel, double sourceRate) {
             SimulationSetup s = ChannelSimulation.setup(channel, mode, sourceRate);
             if (rateList != null) {

@@ -84,7 +84,7 @@ public final class PeerSideBySide {
         Resampling java = mode.equals("a") ? Resampling.bareKernel() : Resampling.polyphaseDefault();
         StringBuilder out = new StringBuilder();
         out.append(String.format(Locale.ROOT, "{\"samples\":%d,\"rates\":%d,\"mode\":\"%s\",\"java\":\"%s\",\"threads\":%d",
-                x.length, ladder.size(), mode, java.name(), threads));
+                x.length, ladder.size(), mode, java.mode().word(), threads));
         try (SweepEngine engine = new SweepEngine(threads)) {
             long t0 = System.nanoTime();
             SweepResult first = engine.run(x, ladder, java, SpectrumSettings.DEFAULT, SweepProgress.NONE);
