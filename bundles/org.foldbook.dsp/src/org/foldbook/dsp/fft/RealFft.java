@@ -12,7 +12,11 @@ import org.visnow.jlargearrays.ConcurrencyUtils;
 
 /**
  * Forward DFT of a real sequence of any length {@code n >= 1} (JTransforms' {@code DoubleFFT_1D} inside:
- * split radix for powers of two, mixed radix, Bluestein for large prime factors).
+ * split radix for powers of two, mixed radix, Bluestein for large prime factors). Powers of two from
+ * {@code 2 L^2} to {@value FftKernels#MAX_VECTOR_LENGTH} (L doubles a vector; 128 with AVX-512) run the
+ * forward transforms in {@link VectorRealFft} instead when the JVM was started with
+ * {@code --add-modules jdk.incubator.vector} (see {@link FftKernels}); {@link #kernel()} says which. Both
+ * agree to rounding (about 1e-15 of the largest bin).
  *
  * <h2>Convention and layout</h2>
  * {@code X[k] = sum_{j=0}^{n-1} x[j] exp(-2 pi i j k / n)}, unnormalised (no 1/n). Only the one-sided half
@@ -36,16 +40,29 @@ import org.visnow.jlargearrays.ConcurrencyUtils;
 public final class RealFft {
     private final int n;
     private final DoubleFFT_1D fft;
+    private final VectorRealFft vector; // null: the library does the forward transforms too
 
-    private RealFft(int n) {
+    private RealFft(int n, boolean mayUseVector) {
         this.n = n;
         this.fft = n > 1 ? new DoubleFFT_1D(n) : null;
+        this.vector = mayUseVector ? FftKernels.vectorKernelFor(n) : null;
     }
 
     /** An operator for sequences of length {@code n >= 1}. */
     public static RealFft of(int n) {
         Check.atLeast("n", n, 1);
-        return new RealFft(n);
+        return new RealFft(n, true);
+    }
+
+    /** An operator that never uses the vector kernel (the scalar path, for comparisons in tests). */
+    static RealFft libraryOnly(int n) {
+        Check.atLeast("n", n, 1);
+        return new RealFft(n, false);
+    }
+
+    /** Which code computes the forward transforms: {@code "vector-api"} or {@code "jtransforms"}. */
+    public String kernel() {
+        return vector != null ? "vector-api" : "jtransforms";
     }
 
     /** Transform length n. */
@@ -93,6 +110,11 @@ public final class RealFft {
         requireLength("work", work, n);
         requireLength("re", re, bins());
         requireLength("im", im, bins());
+        if (vector != null) {
+            vector.forward(work, re, im);
+            requireFiniteDc(re[0]);
+            return;
+        }
         transform(work);
         if (n == 1) {
             re[0] = work[0];
@@ -166,6 +188,10 @@ public final class RealFft {
     public void accumulatePowerInPlace(double[] work, double[] sum) {
         requireLength("work", work, n);
         requireLength("sum", sum, bins());
+        if (vector != null) {
+            requireFiniteDc(vector.accumulatePower(work, sum));
+            return;
+        }
         transform(work);
         if (n == 1) {
             sum[0] += work[0] * work[0];
@@ -196,9 +222,13 @@ public final class RealFft {
         if (fft != null) {
             fft.realForward(work);
         }
-        if (!Double.isFinite(work[0])) {
+        requireFiniteDc(work[0]);
+    }
+
+    private void requireFiniteDc(double dc) {
+        if (!Double.isFinite(dc)) {
             throw new IllegalArgumentException("work[0.." + n + ") must hold finite samples of moderate size: "
-                    + "the transform's DC bin came out " + work[0]);
+                    + "the transform's DC bin came out " + dc);
         }
     }
 
