@@ -48,7 +48,8 @@ if [ -z "$heap" ]; then
     [ "$mb" -gt "$cap" ] && mb="$cap"
     heap="${mb}m"
 fi
-java_args=(-Xmx"$heap" -Djava.awt.headless=true -cp "$product/plugins/*")
+# --add-modules jdk.incubator.vector: the FFT's Vector API kernel (dsp.fft.FftKernels; scalar path without it)
+java_args=(-Xmx"$heap" -Djava.awt.headless=true --add-modules jdk.incubator.vector -cp "$product/plugins/*")
 cache_dir="${XDG_CACHE_HOME:-$HOME/.cache}/foldbook"
 if [ "${FOLDBOOK_AOT:-1}" != 0 ] && mkdir -p "$cache_dir" 2>/dev/null && [ -w "$cache_dir" ]; then
     key=$(printf '%s\n%s\n' "$FOLDBOOK_JAVA_HOME" "$product" | sha256sum | cut -c1-16)

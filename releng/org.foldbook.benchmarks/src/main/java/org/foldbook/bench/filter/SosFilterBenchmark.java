@@ -28,7 +28,7 @@ import org.openjdk.jmh.annotations.Warmup;
 @OutputTimeUnit(TimeUnit.MICROSECONDS)
 @Warmup(iterations = 2, time = 1)
 @Measurement(iterations = 3, time = 1)
-@Fork(value = 1, jvmArgs = {"-Xms1g", "-Xmx1g"})
+@Fork(value = 1, jvmArgs = {"-Xms1g", "-Xmx1g", "--add-modules=jdk.incubator.vector"})
 public class SosFilterBenchmark {
 
     @Param({"65536", "1048576"})

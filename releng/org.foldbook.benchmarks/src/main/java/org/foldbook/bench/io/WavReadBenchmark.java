@@ -43,7 +43,7 @@ import org.openjdk.jmh.infra.Blackhole;
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 3, time = 1)
 @Measurement(iterations = 5, time = 2)
-@Fork(1)
+@Fork(value = 1, jvmArgs = "--add-modules=jdk.incubator.vector")
 public class WavReadBenchmark {
     private static final int DATA_BYTES = 32 << 20;
 

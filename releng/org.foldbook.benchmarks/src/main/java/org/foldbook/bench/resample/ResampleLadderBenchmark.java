@@ -40,7 +40,7 @@ import org.openjdk.jmh.infra.Blackhole;
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
-@Fork(value = 1, jvmArgs = {"-Xms2g", "-Xmx2g"})
+@Fork(value = 1, jvmArgs = {"-Xms2g", "-Xmx2g", "--add-modules=jdk.incubator.vector"})
 @Warmup(iterations = 2, time = 3)
 @Measurement(iterations = 3, time = 3)
 public class ResampleLadderBenchmark {

@@ -9,6 +9,7 @@ import org.foldbook.dsp.spectrum.Detrend;
 import org.foldbook.dsp.window.WindowShape;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Param;
@@ -20,6 +21,7 @@ import org.openjdk.jmh.annotations.State;
  * Amplitude spectrum (Hann, constant detrend, peak scale) of one block of 2^12 .. 2^22 samples through the
  * zero-allocation entry, against a plain copy of the same array.
  */
+@Fork(value = 1, jvmArgs = "--add-modules=jdk.incubator.vector")
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MICROSECONDS)

@@ -6,6 +6,7 @@ import org.foldbook.dsp.fft.RealFft;
 import org.foldbook.dsp.spectrum.Welch;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Param;
@@ -18,6 +19,7 @@ import org.openjdk.jmh.annotations.State;
  * settings) of 2^12 .. 2^22 samples through the zero-allocation entry, against a plain copy of the same
  * array. Segments per call: {@code (2^k - 2048) / 2048}, 1 for 2^12, 2047 for 2^22.
  */
+@Fork(value = 1, jvmArgs = "--add-modules=jdk.incubator.vector")
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MICROSECONDS)

@@ -27,13 +27,14 @@ import org.openjdk.jmh.annotations.Warmup;
  * The whole stepped-rate sweep (re-sample, Welch PSD, peaks, verdicts) over the peer's default ladder:
  * N samples at 100 kS/s (synthetic: the peer's five tones plus seeded noise), 100 geometric rates down to
  * 2 kS/s, limit_denominator(1000). One operation = one sweep. {@code copyLadder} is the same-run baseline
- * (one copy of the recording per rate); report the modes as ratios to it, and threads=2 against threads=1.
+ * (one copy of the recording per rate); report the modes as ratios to it, threads=2 against threads=1 and
+ * the two FFT kernels against each other.
  * The machine is shared: figures are noisy.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
-@Fork(value = 1, jvmArgs = {"-Xms3g", "-Xmx3g"})
+@Fork(value = 1, jvmArgs = {"-Xms3g", "-Xmx3g", "--add-modules=jdk.incubator.vector"})
 @Warmup(iterations = 2, time = 2)
 @Measurement(iterations = 5, time = 2)
 public class SweepBenchmark {
@@ -48,6 +49,10 @@ public class SweepBenchmark {
     @Param({"1", "2"})
     public int threads;
 
+    /** FFT of the Welch segments: the Vector API kernel or JTransforms (see {@link FftKernelChoice}). */
+    @Param({"vector-api", "jtransforms"})
+    public String fftKernel;
+
     private double[] x;
     private double[] copy;
     private RateLadder ladder;
@@ -56,6 +61,7 @@ public class SweepBenchmark {
 
     @Setup(Level.Trial)
     public void setUp() {
+        FftKernelChoice.select(fftKernel);
         x = peerTones(samples, 12345);
         copy = new double[samples];
         ladder = RateLadder.geometric(FS0, FS0, 2000, 100, 1000);
