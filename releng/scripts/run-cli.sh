@@ -26,14 +26,14 @@ if [ -z "$jar" ] || [ -n "$(find "$here"/bundles/*/src "$here"/bundles/*/META-IN
     [ -n "$jar" ] || { echo "foldbook: no org.foldbook.cli jar in $product/plugins after the build" >&2; exit 3; }
 fi
 
+input=""
+prev=""
+for a in "$@"; do
+    [ "$prev" = "--input" ] && input="$a"
+    prev="$a"
+done
 heap="${FOLDBOOK_HEAP:-${FOLDBOOK_SWEEP_HEAP:-}}"
 if [ -z "$heap" ]; then
-    input=""
-    prev=""
-    for a in "$@"; do
-        [ "$prev" = "--input" ] && input="$a"
-        prev="$a"
-    done
     mb=1024
     stream=0
     for a in "$@"; do [ "$a" = "--stream" ] && stream=1; done
@@ -48,11 +48,24 @@ if [ -z "$heap" ]; then
     [ "$mb" -gt "$cap" ] && mb="$cap"
     heap="${mb}m"
 fi
-# --add-modules jdk.incubator.vector: the FFT's Vector API kernel (dsp.fft.FftKernels; scalar path without it)
-java_args=(-Xmx"$heap" -Djava.awt.headless=true --add-modules jdk.incubator.vector -cp "$product/plugins/*")
+# The FFT's Vector API kernel (dsp.fft.FftKernels) needs --add-modules jdk.incubator.vector. It is about twice
+# JTransforms' speed once compiled, but until the JIT has compiled it (a few hundred transforms) it runs far
+# slower and costs about 0.5 CPU-seconds of warm-up (benchmarks README): it pays from about 10^5 transforms, so
+# it is used for large inputs (>= 64 MiB, i.e. 8.4e6 float64 samples) and streamed sweeps; FOLDBOOK_FFT_VECTOR=1
+# or 0 decides instead. The two kernels agree to about 1e-15 of the largest bin; a given command line always
+# picks the same one.
+vector="${FOLDBOOK_FFT_VECTOR:-}"
+if [ -z "$vector" ]; then
+    vector=0
+    for a in "$@"; do [ "$a" = "--stream" ] && vector=1; done
+    [ -n "${input:-}" ] && [ -f "$input" ] && [ "$(stat -c %s "$input")" -ge $((64 * 1048576)) ] && vector=1
+fi
+java_args=(-Xmx"$heap" -Djava.awt.headless=true)
+[ "$vector" = 1 ] && java_args+=(--add-modules jdk.incubator.vector)
+java_args+=(-cp "$product/plugins/*")
 cache_dir="${XDG_CACHE_HOME:-$HOME/.cache}/foldbook"
 if [ "${FOLDBOOK_AOT:-1}" != 0 ] && mkdir -p "$cache_dir" 2>/dev/null && [ -w "$cache_dir" ]; then
-    key=$(printf '%s\n%s\n' "$FOLDBOOK_JAVA_HOME" "$product" | sha256sum | cut -c1-16)
+    key=$(printf '%s\n%s\n%s\n' "$FOLDBOOK_JAVA_HOME" "$product" "$vector" | sha256sum | cut -c1-16)
     if [ "$(foldbook_java_major "$FOLDBOOK_JAVA_HOME")" -ge 25 ] 2>/dev/null; then
         cache="$cache_dir/cli-$key.aot"
         if [ -f "$cache" ] && [ -n "$(find "$product/plugins" -newer "$cache" -name '*.jar' 2>/dev/null | head -n 1)" ]; then

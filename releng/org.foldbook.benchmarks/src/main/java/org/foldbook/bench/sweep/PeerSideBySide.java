@@ -37,6 +37,8 @@ import org.foldbook.sweep.SweepResult;
  *   --peer ../shared/peer/peer_sweep.py --signal rec1e6.f64 --grid grid.txt --details details.json \
  *   --mode a --threads 1 --sweeps 5 --warmup 2 [--max-attempts 15]
  * </pre>
+ * ({@code --add-modules jdk.incubator.vector} too, for the FFT's vector kernel: the JSON's "fft" says which
+ * ran; {@code --sweeps 0 --warmup 0} compares the answers only.)
  * Prints one JSON line. Mode a = Java bare-kernel (the kernel alone, as the peer), b = Java polyphase-default; --threads N pairs with the peer's --jobs N.
  */
 public final class PeerSideBySide {
@@ -83,8 +85,9 @@ public final class PeerSideBySide {
         }
         Resampling java = mode.equals("a") ? Resampling.bareKernel() : Resampling.polyphaseDefault();
         StringBuilder out = new StringBuilder();
-        out.append(String.format(Locale.ROOT, "{\"samples\":%d,\"rates\":%d,\"mode\":\"%s\",\"java\":\"%s\",\"threads\":%d",
-                x.length, ladder.size(), mode, java.mode().word(), threads));
+        out.append(String.format(Locale.ROOT,
+                "{\"samples\":%d,\"rates\":%d,\"mode\":\"%s\",\"java\":\"%s\",\"threads\":%d,\"fft\":\"%s\"",
+                x.length, ladder.size(), mode, java.mode().word(), threads, org.foldbook.dsp.fft.RealFft.of(4096).kernel()));
         try (SweepEngine engine = new SweepEngine(threads)) {
             long t0 = System.nanoTime();
             SweepResult first = engine.run(x, ladder, java, SpectrumSettings.DEFAULT, SweepProgress.NONE);
@@ -160,11 +163,17 @@ public final class PeerSideBySide {
         if (w.length == 0) {
             w = runs.stream().mapToDouble(r -> r[0]).sorted().toArray();
         }
+        if (w.length == 0) {
+            return Double.NaN; // --sweeps 0: answers only
+        }
         return w.length % 2 == 1 ? w[w.length / 2] : 0.5 * (w[w.length / 2 - 1] + w[w.length / 2]);
     }
 
     static double median(List<double[]> runs, int column) {
         double[] v = runs.stream().mapToDouble(r -> r[column]).sorted().toArray();
+        if (v.length == 0) {
+            return Double.NaN;
+        }
         return v.length % 2 == 1 ? v[v.length / 2] : 0.5 * (v[v.length / 2 - 1] + v[v.length / 2]);
     }
 
