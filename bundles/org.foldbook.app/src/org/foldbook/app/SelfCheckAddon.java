@@ -33,13 +33,15 @@ import jakarta.inject.Inject;
  * Installation self-check ({@code ./foldbook --self-check DIR}): once the workbench has started, it
  * records which windows and parts were really rendered, saves a screenshot of the main window, then
  * shows every part in turn (parts sharing a stack are tabs) and saves a screenshot of each
- * ({@code part-<id>.png}), writes the report to DIR and closes the workbench. It lets a person (or the build's smoke test) see that the
+ * ({@code part-<id>.png}), then the Simulation layout ({@code perspective-simulation.png}), writes the report to DIR and closes the workbench. It lets a person (or the build's smoke test) see that the
  * product starts on this machine's display without clicking anything. Inactive unless the system
  * property {@value #PROPERTY} names a folder.
  */
 public class SelfCheckAddon {
     /** System property naming the output folder; the addon does nothing without it. */
     public static final String PROPERTY = "foldbook.selfCheck";
+    /** Where parts are looked for: the perspectives, and the window's shared parts (Notebook, Rate sweep). */
+    private static final int EVERYWHERE = EModelService.ANYWHERE | EModelService.IN_SHARED_ELEMENTS;
     /** Delay before the check, so that the first layout and paint have happened. */
     private static final int SETTLE_MILLIS = 2500;
     /** Time a part gets, once shown, to read its data and draw. */
@@ -75,7 +77,8 @@ public class SelfCheckAddon {
 
     private void showSimulationPart() {
         EPartService parts = mainWindowParts();
-        for (MPart part : modelService.findElements(application, "org.foldbook.ui.part.simulation", MPart.class)) {
+        for (MPart part : modelService.findElements(application, "org.foldbook.ui.part.simulation", MPart.class, null,
+                EVERYWHERE)) {
             if (parts != null) {
                 parts.showPart(part, EPartService.PartState.VISIBLE);
             }
@@ -107,7 +110,8 @@ public class SelfCheckAddon {
             }
             // then every part brought to the top of its stack in turn (tabs hide each other), given time
             // to read and draw, recorded and photographed on its own
-            for (MPart part : modelService.findElements(application, null, MPart.class)) {
+            for (MPart part : new java.util.LinkedHashSet<>(
+                    modelService.findElements(application, null, MPart.class, null, EVERYWHERE))) {
                 EPartService parts = part.getContext() != null ? part.getContext().get(EPartService.class)
                         : mainWindowParts();
                 if (parts != null) {
@@ -123,6 +127,7 @@ public class SelfCheckAddon {
                 }
             }
             if (mainShell != null) {
+                simulationLayout(display, mainShell, folder, report);
                 // after every part was shown: the rate sweep has followed the selected channel by now
                 report.add("simulation.status=" + SelfCheckSimulation.text(mainShell, "status"));
                 report.add("simulation.whatIf=" + SelfCheckSimulation.text(mainShell, "whatIfState"));
@@ -130,6 +135,28 @@ public class SelfCheckAddon {
             Files.write(folder.resolve("self-check.properties"), report, StandardCharsets.UTF_8);
         } catch (IOException e) {
             throw new UncheckedIOException("self-check could not write to " + folder, e);
+        }
+    }
+
+    /** The Simulation layout (Window ▸ Simulation layout): switched to, recorded and photographed. */
+    private void simulationLayout(Display display, Shell mainShell, Path folder, List<String> report) {
+        for (MTrimmedWindow window : modelService.findElements(application, null, MTrimmedWindow.class)) {
+            if (window.getWidget() != mainShell) {
+                continue;
+            }
+            boolean switched = LayoutHandlers.switchTo(LayoutHandlers.SIMULATION, window, modelService,
+                    window.getContext().get(EPartService.class));
+            settle(display, PART_SETTLE_MILLIS);
+            report.add("perspective.simulation=" + (switched ? "shown" : "missing"));
+            for (MPart part : modelService.findElements(application, "org.foldbook.ui.part.simulation", MPart.class,
+                    null, EVERYWHERE)) {
+                if (part.getWidget() instanceof Control c && !c.isDisposed() && c.isVisible()) {
+                    Rectangle b = c.getBounds();
+                    report.add("perspective.simulation.sweepSize=" + b.width + "x" + b.height);
+                }
+            }
+            report.add("perspective.simulation.screenshot="
+                    + saveScreenshot(display, mainShell, folder.resolve("perspective-simulation.png")));
         }
     }
 

@@ -9,6 +9,7 @@ import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.jface.layout.GridDataFactory;
 import org.eclipse.jface.layout.GridLayoutFactory;
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.layout.RowLayout;
 import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
@@ -48,31 +49,50 @@ final class PlanFields {
 
     PlanFields(Composite parent, Consumer<String> problem) {
         this.problem = problem;
+        // groups of label and field that wrap as a row when the part is narrow (the Notebook layout's lower
+        // stack is wide, the Simulation layout's column is not)
         row = new Composite(parent, SWT.NONE);
-        GridLayoutFactory.fillDefaults().numColumns(16).spacing(4, 2).applyTo(row);
-        new Label(row, SWT.NONE).setText("Rates:");
-        spacing = new Combo(row, SWT.READ_ONLY);
+        RowLayout wrap = new RowLayout(SWT.HORIZONTAL);
+        wrap.wrap = true;
+        wrap.center = true;
+        wrap.marginLeft = wrap.marginRight = wrap.marginTop = wrap.marginBottom = 0;
+        wrap.spacing = 8;
+        row.setLayout(wrap);
+        Composite rates = group(3);
+        new Label(rates, SWT.NONE).setText("Rates:");
+        spacing = new Combo(rates, SWT.READ_ONLY);
         spacing.setItems(SPACINGS);
         SimulationPart.name(spacing, "spacing");
         spacing.addListener(SWT.Selection, e -> spacingChosen());
-        from = field("from", "highest", P.getSweepPlan_MaxRateHz(), 70);
-        to = field("to", "lowest", P.getSweepPlan_MinRateHz(), 70);
-        count = field("count", "count", P.getSweepPlan_RateCount(), 36);
-        list = new Text(row, SWT.BORDER);
+        list = new Text(rates, SWT.BORDER);
         SimulationPart.name(list, "list");
         list.setMessage("rates, S/s");
         GridDataFactory.fillDefaults().hint(110, SWT.DEFAULT).applyTo(list);
-        bandLow = field("bandLow", "band", P.getSweepPlan_BandLowHz(), 50);
-        bandHigh = field("bandHigh", "–", P.getSweepPlan_BandHighHz(), 50);
-        new Label(row, SWT.NONE).setText("through");
-        through = new Combo(row, SWT.READ_ONLY);
+        Composite ladder = group(6);
+        from = field(ladder, "from", "highest", P.getSweepPlan_MaxRateHz(), 70);
+        to = field(ladder, "to", "lowest", P.getSweepPlan_MinRateHz(), 70);
+        count = field(ladder, "count", "count", P.getSweepPlan_RateCount(), 36);
+        Composite band = group(4);
+        bandLow = field(band, "bandLow", "band", P.getSweepPlan_BandLowHz(), 50);
+        bandHigh = field(band, "bandHigh", "–", P.getSweepPlan_BandHighHz(), 50);
+        Composite chain = group(2);
+        new Label(chain, SWT.NONE).setText("through");
+        through = new Combo(chain, SWT.READ_ONLY);
         SimulationPart.name(through, "through");
+        // chain names are long: a narrow combo keeps the groups on few lines
+        GridDataFactory.fillDefaults().hint(190, SWT.DEFAULT).applyTo(through);
         through.addListener(SWT.Selection, e -> throughChosen());
     }
 
-    private Text field(String id, String label, EStructuralFeature feature, int width) {
-        new Label(row, SWT.NONE).setText(label);
-        Text t = new Text(row, SWT.BORDER);
+    private Composite group(int columns) {
+        Composite g = new Composite(row, SWT.NONE);
+        GridLayoutFactory.fillDefaults().numColumns(columns).spacing(4, 2).applyTo(g);
+        return g;
+    }
+
+    private Text field(Composite group, String id, String label, EStructuralFeature feature, int width) {
+        new Label(group, SWT.NONE).setText(label);
+        Text t = new Text(group, SWT.BORDER);
         SimulationPart.name(t, id);
         GridDataFactory.fillDefaults().hint(width, SWT.DEFAULT).applyTo(t);
         t.addListener(SWT.DefaultSelection, e -> apply(feature, t));
@@ -122,11 +142,13 @@ final class PlanFields {
             }
             SignalChain t = p == null ? null : p.getThroughChain();
             through.select(Math.max(0, chains.indexOf(t)));
-            for (var c : row.getChildren()) {
-                c.setEnabled(next != null && doc != null);
+            for (var g : row.getChildren()) {
+                for (var c : ((Composite) g).getChildren()) {
+                    c.setEnabled(next != null && doc != null);
+                }
             }
             list.setEnabled(next != null && spacing.getSelectionIndex() == 2);
-            row.layout();
+            row.layout(true, true);
         } finally {
             showing = false;
         }

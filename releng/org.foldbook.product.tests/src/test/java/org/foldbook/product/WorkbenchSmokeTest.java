@@ -81,6 +81,14 @@ class WorkbenchSmokeTest {
                 report.toString());
         assertEquals("after a run", report.getProperty("simulation.whatIf"), report.toString());
         assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.notebook"), report.toString());
+        // the Simulation layout (Window ▸ Simulation layout) gives the rate sweep the window's height and most
+        // of its width: at least 850 × 700 of the 1360 × 920 window, where the notebook layout's lower stack
+        // leaves it about 320 pixels of height
+        assertEquals("shown", report.getProperty("perspective.simulation"), report.toString());
+        String[] sweep = report.getProperty("perspective.simulation.sweepSize", "0x0").split("x");
+        assertTrue(Integer.parseInt(sweep[0]) >= 850 && Integer.parseInt(sweep[1]) >= 700, report.toString());
+        assertTrue(distinctColours(ImageIO.read(out.resolve("perspective-simulation.png").toFile())) > 20,
+                "the Simulation layout's screenshot is (nearly) a single colour");
         assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.walkthrough"), report.toString());
         assertTrue(Files.isRegularFile(out.resolve("part-org.foldbook.ui.part.walkthrough.png")), report.toString());
         assertEquals("visible", report.getProperty("part.org.foldbook.ui.part.recording"), report.toString());
