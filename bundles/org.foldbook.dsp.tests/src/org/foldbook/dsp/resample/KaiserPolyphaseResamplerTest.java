@@ -31,11 +31,12 @@ class KaiserPolyphaseResamplerTest {
     @Test
     void costIsAboutTwentyTapsPerInputSample() {
         // scipy's design: 20·max(up,down)+1 prototype taps, so ≈ 20·down/up taps per output (docs/REFERENCES.md, scipy resample_poly default design)
-        assertEquals(1001, KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(1, 50)).tapsPerOutput());
-        // 765/1000 uses 27-28 taps per phase, stored padded to the 32-tap loop
-        assertEquals(32, KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(765, 1000)).tapsPerOutput());
-        // 3/8: 161-tap prototype at 3·fs0, phases span k = -27 .. 26 (20·8/3 + 1 ≈ 54)
-        assertEquals(54, KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(3, 8)).tapsPerOutput());
+        // (1001 for 1/50, run padded with zeros to a multiple of 4: 1004 multiply-adds per output)
+        assertEquals(1004, KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(1, 50)).tapsPerOutput());
+        // 765/1000 uses 27-28 taps per phase, stored padded with zeros to a multiple of 4
+        assertEquals(28, KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(765, 1000)).tapsPerOutput());
+        // 3/8: 161-tap prototype at 3·fs0, phases span k = -27 .. 26 (20·8/3 + 1 ≈ 54), padded to 56
+        assertEquals(56, KaiserPolyphaseResampler.resamplePolyDefaults(RateRatio.of(3, 8)).tapsPerOutput());
     }
 
     @Test

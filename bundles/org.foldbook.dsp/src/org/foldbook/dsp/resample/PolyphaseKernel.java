@@ -41,8 +41,21 @@ final class PolyphaseKernel {
         }
         this.up = up;
         this.down = down;
-        this.taps = taps;
         this.offset = offset;
+        // rows padded with zeros to a multiple of 4 for RowLoops: same sums, same bits (see there)
+        int padded = (taps + 3) & ~3;
+        if (padded != taps) {
+            if ((long) up * padded > MAX_TABLE) {
+                throw new IllegalArgumentException("polyphase table of " + up + " phases x " + padded + " taps exceeds "
+                        + MAX_TABLE + " coefficients");
+            }
+            double[] t = new double[up * padded];
+            for (int p = 0; p < up; p++) {
+                System.arraycopy(table, p * taps, t, p * padded, taps);
+            }
+            table = t;
+        }
+        this.taps = padded;
         this.table = table;
         this.stepWhole = down / up;
         this.stepRest = down % up;
@@ -60,10 +73,8 @@ final class PolyphaseKernel {
         int kMax = Math.floorDiv(g.length - 1 - center, up);
         int kMin = -Math.floorDiv(center + up - 1, up);       // ceil((-center - (up-1)) / up)
         int used = kMax - kMin + 1;
-        // With several phases, rows of up to 32 taps are padded with zeros to 32: that length has the
-        // fully unrolled loops that take four outputs of one phase per pass (see run32), which is faster
-        // than a general loop over fewer taps even counting the zeros.
-        int taps = used <= 32 && up >= 4 ? 32 : used;
+        // rows padded with zeros to a multiple of 4, the step of RowLoops (adding 0·x changes no sum)
+        int taps = (used + 3) & ~3;
         if ((long) up * taps > MAX_TABLE) {
             throw new IllegalArgumentException("polyphase table of " + up + " phases x " + taps + " taps exceeds "
                     + MAX_TABLE + " coefficients");
@@ -141,7 +152,7 @@ final class PolyphaseKernel {
         } else if (taps == SixteenTapLoops.TAPS) {
             SixteenTapLoops.run(table, up, down, buf, (int) first, p, m0, out, outOff, count);
         } else {
-            runAny(buf, (int) first, p, out, outOff, count);
+            RowLoops.run(table, up, down, taps, buf, (int) first, p, m0, out, outOff, count);
         }
     }
 
@@ -266,41 +277,6 @@ final class PolyphaseKernel {
                     }
                     out[outOff + (q0 + q) * u + j] = (e0 + e1) + (o0 + o1);
                 }
-            }
-        }
-    }
-
-    // Any other tap count (the filtered re-samplers): eight running sums, the remainder into the first.
-    private void runAny(double[] x, int pos, int p, double[] out, int outOff, int count) {
-        final double[] h = table;
-        final int n = taps;
-        final int n8 = n & ~7;
-        final int u = up;
-        final int sw = stepWhole;
-        final int sr = stepRest;
-        for (int o = outOff, end = outOff + count; o < end; o++) {
-            int r = p * n;
-            double s0 = 0, s1 = 0, s2 = 0, s3 = 0, s4 = 0, s5 = 0, s6 = 0, s7 = 0;
-            int i = 0;
-            for (; i < n8; i += 8) {
-                s0 = Math.fma(x[pos + i], h[r + i], s0);
-                s1 = Math.fma(x[pos + i + 1], h[r + i + 1], s1);
-                s2 = Math.fma(x[pos + i + 2], h[r + i + 2], s2);
-                s3 = Math.fma(x[pos + i + 3], h[r + i + 3], s3);
-                s4 = Math.fma(x[pos + i + 4], h[r + i + 4], s4);
-                s5 = Math.fma(x[pos + i + 5], h[r + i + 5], s5);
-                s6 = Math.fma(x[pos + i + 6], h[r + i + 6], s6);
-                s7 = Math.fma(x[pos + i + 7], h[r + i + 7], s7);
-            }
-            for (; i < n; i++) {
-                s0 = Math.fma(x[pos + i], h[r + i], s0);
-            }
-            out[o] = ((s0 + s1) + (s2 + s3)) + ((s4 + s5) + (s6 + s7));
-            pos += sw;
-            p += sr;
-            if (p >= u) {
-                p -= u;
-                pos++;
             }
         }
     }
